@@ -37,7 +37,7 @@ final class CellReader {
         Optional<SectionReader> section = root.table(which);
         if (section.isEmpty()) {
             if (!root.has(which)) {
-                root.missing(which + ".material", "\"stainless\"");
+                root.missing(which + ".material", which.equals("anode") ? "\"graphite\"" : "\"stainless\"");
                 root.missing(which + ".area", "\"1.2 dm2\"");
             }
             return Optional.empty();

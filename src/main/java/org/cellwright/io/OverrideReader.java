@@ -52,12 +52,13 @@ final class OverrideReader {
             Double conductivity = s.quantity("conductivity", Dimension.MOLAR_CONDUCTIVITY, Range.NON_NEGATIVE)
                     .orElse(null);
             if (known.isEmpty()) {
-                for (String required : List.of("charge", "molar_mass", "diffusion")) {
-                    if (!s.has(required)) {
-                        s.log().error(s.table().at(), s.key(required), "'" + raw + "' is not in the library, so a "
-                                + "new species needs charge, molar_mass and diffusion"
-                                + Spelling.suggestion(raw, library.species().stream().map(Species::name).toList()));
-                    }
+                List<String> absent = List.of("charge", "molar_mass", "diffusion").stream().filter(k -> !s.has(k))
+                        .toList();
+                if (!absent.isEmpty()) {
+                    s.log().error(s.table().at(), s.path(), "'" + raw + "' is not in the library"
+                            + Spelling.suggestion(raw, library.species().stream().map(Species::name).toList())
+                            + "; a new species needs charge, molar_mass and diffusion (missing: "
+                            + String.join(", ", absent) + ")");
                 }
             }
             if (s.table().entries().isEmpty()) {

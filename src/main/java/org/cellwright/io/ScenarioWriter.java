@@ -4,7 +4,9 @@ import java.io.IOException;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
+import java.util.HashMap;
 import java.util.List;
+import java.util.Map;
 
 import org.cellwright.cell.CellSetup;
 import org.cellwright.cell.ControlMode;
@@ -17,31 +19,52 @@ import org.cellwright.cell.Scenario;
 import org.cellwright.cell.SetPoint;
 import org.cellwright.cell.SpeciesOverride;
 import org.cellwright.cell.StopCondition;
+import org.cellwright.chem.ChemLibrary;
 import org.tomlj.Toml;
 
 /**
  * Writes a {@link Scenario} as scenario TOML with readable units ("0.8 L", "35 mm", "25 C"), such that
  * {@link ScenarioReader} reads it back to an equal scenario: every number is written with the digits it
  * needs to come back as the same double (see {@link QuantityFormat}). Concentrations are written in mol/L,
- * since the scenario holds no record of the unit they were given in.
+ * or, given the chemistry library for molar masses, in g/L when that is the shorter number (a bath made up
+ * as "40 g/L" is written back so).
  */
 public final class ScenarioWriter {
 
     private final StringBuilder out = new StringBuilder();
+    private final Map<String, Double> molarMassKgPerMol = new HashMap<>();
 
     private ScenarioWriter() {
     }
 
-    /** @return the scenario as TOML text */
+    /** @return the scenario as TOML text, concentrations in amount units */
     public static String write(Scenario s) {
+        return write(s, null);
+    }
+
+    /**
+     * @param s the scenario
+     * @param library the chemistry for molar masses (so that concentrations can be written in g/L), or null
+     * @return the scenario as TOML text
+     */
+    public static String write(Scenario s, ChemLibrary library) {
         ScenarioWriter w = new ScenarioWriter();
+        if (library != null) {
+            library.species().forEach(sp -> w.molarMassKgPerMol.put(sp.name(), sp.molarMassKgPerMol()));
+        }
+        s.speciesOverrides().stream().filter(o -> o.molarMassKgPerMol() != null)
+                .forEach(o -> w.molarMassKgPerMol.put(o.name(), o.molarMassKgPerMol()));
         w.all(s);
         return w.out.toString();
     }
 
-    /** Writes the scenario to a file (UTF-8). */
-    public static void write(Scenario s, Path file) throws IOException {
-        Files.writeString(file, write(s), StandardCharsets.UTF_8);
+    /** Writes the scenario to a file (UTF-8), concentrations in g/L where the library allows. */
+    public static void write(Scenario s, ChemLibrary library, Path file) throws IOException {
+        Files.writeString(file, write(s, library), StandardCharsets.UTF_8);
+    }
+
+    private String concentration(String species, double molPerM3) {
+        return QuantityFormat.concentration(molPerM3, molarMassKgPerMol.getOrDefault(species, Double.NaN));
     }
 
     private void all(Scenario s) {
@@ -73,7 +96,7 @@ public final class ScenarioWriter {
             line("conductivity", q(e.conductivitySPerM(), Dimension.CONDUCTIVITY, List.of("mS/cm", "S/m")));
         }
         header("electrolyte.composition");
-        e.compositionMolPerM3().forEach((name, c) -> line(key(name), str(QuantityFormat.concentration(c))));
+        e.compositionMolPerM3().forEach((name, c) -> line(str(name), str(concentration(name, c))));
     }
 
     private void electrode(String which, Electrode e) {
@@ -140,12 +163,12 @@ public final class ScenarioWriter {
     }
 
     /** @return a stop condition in the form {@link StopConditionParser} reads */
-    static String stop(StopCondition c) {
+    private String stop(StopCondition c) {
         if (c instanceof StopCondition.ShortCircuit) {
             return "short";
         }
         if (c instanceof StopCondition.SpeciesBelow s) {
-            return s.species() + " < " + QuantityFormat.concentration(s.molPerM3());
+            return s.species() + " < " + concentration(s.species(), s.molPerM3());
         }
         if (c instanceof StopCondition.TemperatureAbove t) {
             return "T > " + QuantityFormat.format(t.kelvin(), Dimension.TEMPERATURE, List.of("C", "K"));
@@ -158,7 +181,7 @@ public final class ScenarioWriter {
     }
 
     private void species(SpeciesOverride o) {
-        header("species." + key(o.name()));
+        header("species." + str(o.name()));
         if (o.charge() != null) {
             line("charge", Integer.toString(o.charge()));
         }
@@ -174,7 +197,7 @@ public final class ScenarioWriter {
     }
 
     private void reaction(ReactionOverride o) {
-        header("reaction." + key(o.name()));
+        header("reaction." + str(o.name()));
         if (o.equation() != null) {
             line("equation", str(o.equation()));
         }
@@ -222,10 +245,5 @@ public final class ScenarioWriter {
 
     private static String str(String s) {
         return "\"" + Toml.tomlEscape(s) + "\"";
-    }
-
-    /** @return a key, quoted when it is not a bare TOML key */
-    private static String key(String k) {
-        return k.matches("[A-Za-z0-9_-]+") ? k : str(k);
     }
 }

@@ -63,10 +63,18 @@ final class SectionReader {
         }
     }
 
-    /** Reports a missing required entry, with an example of what to write. */
+    /**
+     * Reports a missing required entry, with an example of what to write.
+     *
+     * @param name the entry's name in this table, or "section.name" when its whole section is missing
+     * @param example the value to show
+     */
     void missing(String name, String example) {
-        log.error(table.at(), key(name), "missing required value; add e.g. " + name + " = " + example
-                + (path.isEmpty() ? "" : " under [" + path + "]"));
+        int dot = name.indexOf('.');
+        String advice = !path.isEmpty() ? name + " = " + example + " under [" + path + "]"
+                : dot > 0 ? "a [" + name.substring(0, dot) + "] section with " + name.substring(dot + 1) + " = " + example
+                : name + " = " + example;
+        log.error(table.at(), key(name), "missing required value; add e.g. " + advice);
     }
 
     /** @return a sub-table, or empty (reported when present but not a table) */
@@ -142,9 +150,8 @@ final class SectionReader {
     /** Reads a physical value from any node (also array elements and inline-table entries). */
     Optional<Double> quantity(String key, TomlNode n, Dimension dimension, Range range) {
         if (!(n instanceof TomlNode.Leaf leaf) || !(leaf.value() instanceof String || leaf.value() instanceof Number)) {
-            log.error(n.at(), key, "expected " + dimension.description() + " as a string with a unit (e.g. \"1 "
-                    + UnitCatalog.of(dimension).get(0).symbol() + "\") or a number in " + dimension.siUnit()
-                    + ", got " + n.kind());
+            log.error(n.at(), key, "expected " + dimension.description() + " as a string with a unit (e.g. \""
+                    + dimension.example() + "\") or a number in " + dimension.siUnit() + ", got " + n.kind());
             return Optional.empty();
         }
         double si;

@@ -7,8 +7,9 @@ import java.util.Optional;
 /**
  * "Did you mean" suggestions: the closest known name by Levenshtein edit distance, ignoring case.
  *
- * <p>A name is suggested only when it is at most 2 edits away and fewer edits than half the longer of the
- * two names, so that short unrelated words are not offered.
+ * <p>A name is suggested when it is at most 2 edits away and fewer edits than half the longer of the two
+ * names (so that short unrelated words are not offered), or when it begins with what was written ("W" for
+ * "W/K").
  */
 public final class Spelling {
 
@@ -22,6 +23,13 @@ public final class Spelling {
      */
     public static Optional<String> closest(String written, Collection<String> known) {
         String w = written.toLowerCase(Locale.ROOT);
+        if (!w.isEmpty()) {
+            for (String k : known) {
+                if (k.toLowerCase(Locale.ROOT).startsWith(w) && !k.equals(written)) {
+                    return Optional.of(k);
+                }
+            }
+        }
         String best = null;
         int bestDistance = Integer.MAX_VALUE;
         for (String k : known) {

@@ -49,6 +49,9 @@ sealed interface TomlNode permits TomlNode.Table, TomlNode.Leaf, TomlNode.Array 
 
         /** @return the value as it might have been written, for messages */
         String text() {
+            if (value instanceof Double d && !Double.isFinite(d)) {
+                return d.isNaN() ? "nan" : d > 0 ? "inf" : "-inf";
+            }
             return value instanceof String s ? s : String.valueOf(value);
         }
     }

@@ -107,9 +107,7 @@ public final class UnitParser {
     }
 
     private static String examples(List<Dimension> accepted) {
-        return " such as '" + accepted.stream().map(d -> "1 " + UnitCatalog.of(d).get(
-                d == Dimension.MASS_CONCENTRATION || d == Dimension.VOLUME ? 1 : 0).symbol())
-                .collect(Collectors.joining("' or '")) + "'";
+        return " such as '" + accepted.stream().map(Dimension::example).collect(Collectors.joining("' or '")) + "'";
     }
 
     private static List<String> symbols(List<Dimension> accepted) {
