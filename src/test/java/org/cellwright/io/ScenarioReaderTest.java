@@ -184,6 +184,73 @@ class ScenarioReaderTest {
         assertEquals(String.join(System.lineSeparator(), lines), e.getMessage());
     }
 
+    private static final String MINIMAL = """
+            [electrolyte]
+            volume = "1 L"
+            temperature = "70 C"
+            composition = { "Cu2+" = "0.5 mol/L", "SO4^2-" = "0.5 mol/L" }
+            [cathode]
+            material = "stainless"
+            area = "1 dm2"
+            [anode]
+            material = "lead"
+            area = "1 dm2"
+            [cell]
+            gap = "3 cm"
+            """;
+
+    @Test
+    void arrayOfTablesScheduleAndWarnings() throws ScenarioException {
+        String text = MINIMAL + """
+                [supply]
+                current_limit = "5 A"
+                [[supply.schedule]]
+                at = "10 min"
+                current = "2 A"
+                [[supply.schedule]]
+                at = "1 h"
+                current_density = "50 A/m2"
+                ramp = true
+                [run]
+                duration = "30 s"
+                output_interval = "1 min"
+                target = "Ni"
+                [reaction."Ni2+/Ni"]
+                material = "stainless"
+                """;
+        ScenarioReader.Result r = reader.parse(text, "w.toml", List.of());
+        // 50 A/m2 on 1 dm2 is 0.5 A
+        assertEquals(List.of(new SetPoint(600, 2, false), new SetPoint(3600, 0.5, true)), r.scenario().supply().schedule());
+        // 70 C is above the highest ambient accepted, so 60 C is used
+        assertEquals(333.15, r.scenario().cell().ambientK(), 1e-12);
+        assertEquals(List.of(
+                "w.toml:11:1: cell.ambient: warning: not given, and the bath temperature is outside -50 C to 60 C; 60 C is used, give cell.ambient",
+                "w.toml:14:1: supply.current_limit: warning: has no effect in current control; the supply holds the set current",
+                "w.toml:15:1: supply.schedule: warning: the first point is after the start; until then the supply holds the first point's value",
+                "w.toml:24:1: run.output_interval: warning: is longer than run.duration; only the start and end are recorded",
+                "w.toml:25:1: run.target: warning: no dissolved species of Ni in the electrolyte; nothing of it can deposit unless an anode dissolves it"),
+                r.warnings().stream().map(Problem::format).toList());
+    }
+
+    @Test
+    void newReactionWithItsDataIsAccepted() throws ScenarioException {
+        String text = MINIMAL + """
+                [supply]
+                voltage = "2 V"
+                [run]
+                duration = "1 h"
+                [reaction."PbO2/PbSO4"]
+                equation = "PbO2 + SO4^2- + 4H+ + 2e- = PbSO4 + 2H2O"
+                e0 = "1.6913 V"
+                i0 = "1e-3 A/m2"
+                alpha_a = 1
+                material = "lead"
+                """;
+        Scenario s = reader.parse(text, "n.toml", List.of()).scenario();
+        assertEquals(List.of(new ReactionOverride("PbO2/PbSO4", "PbO2 + SO4^2- + 4H+ + 2e- = PbSO4 + 2H2O", 1.6913,
+                1e-3, 1.0, null, "lead")), s.reactionOverrides());
+    }
+
     @Test
     void missingFileIsABadInputProblem() {
         ScenarioException e = assertThrows(ScenarioException.class,
