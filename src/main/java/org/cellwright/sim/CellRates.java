@@ -1,0 +1,259 @@
+package org.cellwright.sim;
+
+import org.apache.commons.math3.ode.FirstOrderDifferentialEquations;
+import org.cellwright.cell.Scenario;
+import org.cellwright.chem.Participant;
+import org.cellwright.chem.Phase;
+import org.cellwright.chem.PhysicalConstants;
+
+/**
+ * The rates of change of the cell's state: the model, separate from any integrator.
+ *
+ * <p>Each partial current {@code I_k} (A, anodic positive) advances its reaction by
+ * {@code xi = -I_k / (n F)} mol/s in the reduction direction; a participant with signed coefficient
+ * {@code nu} is made at {@code nu * xi} (Faraday's law). Dissolved species change by that over the volume;
+ * metals deposit, anodes dissolve, gases leave, water is consumed. Homogeneous reactions follow mass action.
+ * H+ and OH- are tied by water's ion product (their neutralisation is taken as instantaneous). Part of the
+ * chlorine an inert anode evolves dissolves and may oxidise reductants in the bath before it degasses.
+ * Heat: Joule heat in the gap plus the heat of every overpotential, less a loss to ambient through a lumped
+ * conductance.
+ */
+public final class CellRates implements FirstOrderDifferentialEquations {
+
+    /** Share of anodic chlorine that dissolves in the bath (model assumption, documented in docs/model.md). */
+    static final double CHLORINE_DISSOLVED_SHARE = 0.2;
+    /** First-order degassing rate of dissolved chlorine (1/s); model assumption. */
+    static final double CHLORINE_DEGASSING_PER_S = 1e-3;
+    /** Volumetric heat capacity of the bath (J/(m3 K)): water, 4.18 J/(g K) x 1.0 g/cm3 (CRC Handbook). */
+    static final double HEAT_CAPACITY_J_PER_M3K = 4.18e6;
+    /** Heat-transfer coefficient from tank walls and surface (W/(m2 K)); common practice for still air. */
+    static final double WALL_HEAT_TRANSFER_W_PER_M2K = 10.0;
+
+    private final ReactionNetwork net;
+    private final StateLayout layout;
+    private final OperatingPoint op;
+    private final double volumeM3;
+    private final double ambientK;
+    private final double heatLossWPerK;
+    private final double[] initial;
+    private final double[][] slotNu;
+    private final int[][] slotSpecies;
+    private final double[] slotWater;
+    private final int[] slotGas;
+    private final double[] slotGasNu;
+    private final double[] rate;
+
+    /**
+     * @param sc the scenario
+     * @param net its reaction network
+     */
+    public CellRates(Scenario sc, ReactionNetwork net) {
+        this.net = net;
+        int slots = net.cathodeSlots.size() + net.anodeSlots.size();
+        this.layout = new StateLayout(net.species().size(), net.depositMetals().size(), slots);
+        this.op = new OperatingPoint(sc, net, layout);
+        this.volumeM3 = sc.electrolyte().volumeM3();
+        this.ambientK = sc.cell().ambientK();
+        this.heatLossWPerK = sc.cell().heatLossWPerK() != null ? sc.cell().heatLossWPerK()
+                : defaultHeatLoss(volumeM3);
+        this.rate = new double[net.species().size()];
+        slotNu = new double[slots][];
+        slotSpecies = new int[slots][];
+        slotWater = new double[slots];
+        slotGas = new int[slots];
+        slotGasNu = new double[slots];
+        for (int k = 0; k < slots; k++) {
+            prepareSlot(k, op.slot(k));
+        }
+        initial = new double[layout.size];
+        for (var e : sc.electrolyte().compositionMolPerM3().entrySet()) {
+            int j = net.indexOf(net.species().stream().map(s -> s.name())
+                    .filter(n -> org.cellwright.chem.SpeciesName.candidates(e.getKey()).contains(n))
+                    .findFirst().orElse(e.getKey()));
+            if (j >= 0) {
+                initial[j] = e.getValue();
+            }
+        }
+        if (net.waterEquilibrium()) {
+            initial[net.hIndex] = initial[net.hIndex] - initial[net.ohIndex];
+        }
+        initial[layout.temperature] = sc.electrolyte().temperatureK();
+    }
+
+    /**
+     * Lumped heat-loss conductance of an open cubic tank of the given volume: five faces at
+     * {@link #WALL_HEAT_TRANSFER_W_PER_M2K}.
+     *
+     * @param volumeM3 bath volume (m3)
+     * @return conductance (W/K)
+     */
+    static double defaultHeatLoss(double volumeM3) {
+        double side = Math.cbrt(volumeM3);
+        return 5 * side * side * WALL_HEAT_TRANSFER_W_PER_M2K;
+    }
+
+    private void prepareSlot(int k, ReactionSlot s) {
+        var dissolved = s.reaction().participants().stream().filter(p -> p.phase() == Phase.DISSOLVED).toList();
+        slotNu[k] = new double[dissolved.size()];
+        slotSpecies[k] = new int[dissolved.size()];
+        for (int i = 0; i < dissolved.size(); i++) {
+            slotNu[k][i] = dissolved.get(i).coefficient();
+            slotSpecies[k][i] = net.indexOf(dissolved.get(i).name());
+        }
+        slotGas[k] = -1;
+        for (Participant p : s.reaction().participants()) {
+            if (p.phase() == Phase.WATER) {
+                slotWater[k] += p.coefficient();
+            } else if (p.phase() == Phase.GAS) {
+                for (int g = 0; g < StateLayout.GASES.length; g++) {
+                    if (StateLayout.GASES[g].equals(p.name())) {
+                        slotGas[k] = g;
+                        slotGasNu[k] = p.coefficient();
+                    }
+                }
+            }
+        }
+    }
+
+    /** @return the state layout */
+    StateLayout layout() {
+        return layout;
+    }
+
+    /** @return the operating-point workspace */
+    OperatingPoint operatingPoint() {
+        return op;
+    }
+
+    /** @return the state at the start of the run */
+    public double[] initialState() {
+        return initial.clone();
+    }
+
+    @Override
+    public int getDimension() {
+        return layout.size;
+    }
+
+    @Override
+    public void computeDerivatives(double t, double[] y, double[] yDot) {
+        op.unpack(t, y);
+        op.solve(t);
+        fillRates(yDot);
+    }
+
+    private void fillRates(double[] yDot) {
+        java.util.Arrays.fill(yDot, 0);
+        java.util.Arrays.fill(rate, 0);
+        int nc = op.cathodeI.length;
+        int slots = nc + op.anodeI.length;
+        double gasCl2 = 0;
+        double heat = op.currentA * op.currentA * op.rGap;
+        for (int k = 0; k < slots; k++) {
+            ReactionSlot s = op.slot(k);
+            double amps = k < nc ? op.cathodeI[k] * op.cathodeAreaM2 : op.anodeI[k - nc] * op.anodeAreaM2;
+            double e = k < nc ? op.cathodeE : op.anodeE;
+            double eq = k < nc ? op.cathode.eEq[k] : op.anode.eEq[k - nc];
+            heat += Math.abs(amps * (e - eq));
+            yDot[layout.reactionCharge0 + k] = amps;
+            double xi = -amps / (s.n() * PhysicalConstants.FARADAY);
+            for (int i = 0; i < slotNu[k].length; i++) {
+                rate[slotSpecies[k][i]] += slotNu[k][i] * xi / volumeM3;
+            }
+            if (s.depositMetalIndex() >= 0 && k < nc) {
+                yDot[layout.deposit0 + s.depositMetalIndex()] += xi;
+            }
+            if (s.dissolvesAnode()) {
+                yDot[layout.anodeDissolved] -= xi;
+            }
+            yDot[layout.water] -= slotWater[k] * xi;
+            if (slotGas[k] >= 0) {
+                double made = slotGasNu[k] * xi;
+                if (slotGas[k] == 2 && net.dissolvedChlorineIndex >= 0) {
+                    gasCl2 += made;
+                } else {
+                    yDot[layout.gas0 + slotGas[k]] += made;
+                }
+            }
+        }
+        if (net.dissolvedChlorineIndex >= 0) {
+            int j = net.dissolvedChlorineIndex;
+            double degas = CHLORINE_DEGASSING_PER_S * op.c[j];
+            rate[j] += CHLORINE_DISSOLVED_SHARE * gasCl2 / volumeM3 - degas;
+            yDot[layout.gas0 + 2] += (1 - CHLORINE_DISSOLVED_SHARE) * gasCl2 + degas * volumeM3;
+        }
+        for (ReactionNetwork.PreparedHomogeneous h : net.homogeneous) {
+            double r = h.reaction().rateConstant();
+            for (int i = 0; i < h.index().length; i++) {
+                if (h.order()[i] > 0) {
+                    r *= Math.pow(op.c[h.index()[i]], h.order()[i]);
+                }
+            }
+            for (int i = 0; i < h.index().length; i++) {
+                rate[h.index()[i]] += h.nu()[i] * r;
+            }
+        }
+        for (int j = 0; j < rate.length; j++) {
+            yDot[j] = rate[j];
+        }
+        if (net.waterEquilibrium()) {
+            yDot[net.hIndex] = rate[net.hIndex] - rate[net.ohIndex];
+            yDot[net.ohIndex] = 0;
+            yDot[layout.protonTurnover] = (rate[net.hIndex] + rate[net.ohIndex]) * volumeM3;
+        }
+        double loss = heatLossWPerK * (op.tempK - ambientK);
+        yDot[layout.temperature] = (heat - loss) / (HEAT_CAPACITY_J_PER_M3K * volumeM3);
+        yDot[layout.charge] = op.currentA;
+        yDot[layout.energy] = op.currentA * op.cellVoltageV;
+        yDot[layout.voltageTime] = op.cellVoltageV;
+        yDot[layout.dendrite] = 0;
+    }
+
+    /**
+     * Everything the cell does at time {@code t} in state {@code y}.
+     *
+     * @param t time (s)
+     * @param y state
+     * @return the instant's operating point
+     */
+    public InstantState snapshot(double t, double[] y) {
+        op.unpack(t, y);
+        op.solve(t);
+        int nc = op.cathodeI.length;
+        double[] cath = new double[nc];
+        double[] an = new double[op.anodeI.length];
+        for (int k = 0; k < nc; k++) {
+            cath[k] = op.cathodeI[k] * op.cathodeAreaM2;
+        }
+        for (int k = 0; k < an.length; k++) {
+            an[k] = op.anodeI[k] * op.anodeAreaM2;
+        }
+        int dc = dominant(cath, -1);
+        int da = dominant(an, 1);
+        double eqC = dc >= 0 ? op.cathode.eEq[dc] : op.cathodeE;
+        double eqA = da >= 0 ? op.anode.eEq[da] : op.anodeE;
+        double eff = 0;
+        double limitRatio = 0;
+        if (net.targetSlot >= 0 && op.currentA > 0) {
+            eff = Math.max(0, -cath[net.targetSlot] / op.currentA);
+            limitRatio = Math.max(0, -op.cathodeI[net.targetSlot] * op.cathode.invIlC[net.targetSlot]);
+        }
+        double amps = op.currentA;
+        return new InstantState(t, amps, op.cellVoltageV, op.cathodeE, op.anodeE, eqA - eqC, op.anodeE - eqA,
+                op.cathodeE - eqC, amps * op.rGapNoGas, amps * (op.rGap - op.rGapNoGas), amps * op.contactOhm,
+                cath, an, op.c.clone(), op.tempK, op.kappa, op.voidFraction, eff, limitRatio, op.limited,
+                op.dendriteM);
+    }
+
+    private static int dominant(double[] amps, int sign) {
+        int best = -1;
+        double max = 0;
+        for (int k = 0; k < amps.length; k++) {
+            if (sign * amps[k] > max) {
+                max = sign * amps[k];
+                best = k;
+            }
+        }
+        return best;
+    }
+}

@@ -1,0 +1,165 @@
+package org.cellwright.sim;
+
+import java.util.ArrayList;
+import java.util.List;
+import java.util.TreeSet;
+
+import org.apache.commons.math3.ode.FirstOrderDifferentialEquations;
+import org.apache.commons.math3.ode.FirstOrderIntegrator;
+import org.apache.commons.math3.ode.nonstiff.DormandPrince54Integrator;
+import org.cellwright.cell.Scenario;
+import org.cellwright.cell.SetPoint;
+import org.cellwright.chem.ChemLibrary;
+
+/**
+ * Runs a scenario through time: builds the reaction network and the rates, integrates them with the
+ * injected integrator between schedule breakpoints, lets events stop or mark the run at their root-found
+ * times, samples the output interval, and sums up.
+ */
+public final class CellSimulation {
+
+    /** Relative tolerance of the integration. */
+    static final double REL_TOL = 1e-7;
+
+    /** Receives the time series point by point while the run goes (for live plots). */
+    @FunctionalInterface
+    public interface TraceListener {
+        /** @param point the next point of the time series */
+        void point(TracePoint point);
+    }
+
+    private final IntegratorFactory integrators;
+
+    /** @param integrators makes the integrator each run uses */
+    public CellSimulation(IntegratorFactory integrators) {
+        this.integrators = integrators;
+    }
+
+    /** @return a simulation with the default integrator */
+    public static CellSimulation withDefaults() {
+        return new CellSimulation(CellSimulation::defaultIntegrator);
+    }
+
+    static FirstOrderIntegrator defaultIntegrator(CellRates rates, double[] absTol, double relTol, double maxStep) {
+        double[] rel = new double[absTol.length];
+        java.util.Arrays.fill(rel, relTol);
+        return new DormandPrince54Integrator(1e-9, maxStep, absTol, rel);
+    }
+
+    /**
+     * Runs a scenario.
+     *
+     * @param sc the scenario
+     * @param lib the chemistry library (the scenario's overrides are applied here)
+     * @param listener receives each output point as it is made, or null
+     * @return the run's outcome
+     * @throws IllegalArgumentException when the scenario cannot run with this chemistry
+     */
+    public RunResult run(Scenario sc, ChemLibrary lib, TraceListener listener) {
+        ChemLibrary chem = ScenarioChemistry.apply(lib, sc);
+        ReactionNetwork net = ReactionNetwork.of(chem, sc);
+        CellRates rates = new CellRates(sc, net);
+        StateLayout layout = rates.layout();
+        CountingEquations counted = new CountingEquations(rates);
+        double duration = sc.run().durationS();
+        double[] absTol = absoluteTolerances(sc, layout);
+        FirstOrderIntegrator integrator = integrators.create(rates, absTol, REL_TOL,
+                Math.max(duration / 50, 1.0));
+        List<RunEvent> events = new ArrayList<>();
+        RunEvents detectors = new RunEvents(sc, net, rates, events);
+        double maxCheck = Math.min(sc.run().outputIntervalS(), duration / 200);
+        for (RunEventDetector d : detectors.all()) {
+            integrator.addEventHandler(d, maxCheck, 1e-6, 200);
+        }
+        List<TracePoint> trace = new ArrayList<>();
+        TraceRecorder recorder = new TraceRecorder(rates, net, trace, listener);
+        OutputSampler sampler = new OutputSampler(sc.run().outputIntervalS(), recorder::record);
+        integrator.addStepHandler(sampler);
+
+        double[] y = rates.initialState();
+        double t = 0;
+        String stopAtStart = detectors.stopAlreadyMet(y);
+        if (stopAtStart == null) {
+            for (double end : breakpoints(sc)) {
+                t = integrator.integrate(counted, t, y, end, y);
+                if (detectors.stopped() || t < end) {
+                    break;
+                }
+            }
+        } else {
+            recorder.record(0.0, y);
+        }
+        if (sampler.lastSentS() < t) {
+            recorder.record(t, y);
+        }
+        if (!detectors.stopped() && stopAtStart == null) {
+            events.add(new RunEvent(t, RunEvent.Kind.END, "The run reached its duration of " + RunClock.format(t) + "."));
+        }
+        events.sort(java.util.Comparator.comparingDouble(RunEvent::timeS));
+        RunSummary summary = new SummaryBuilder(sc, net, layout, trace, y, t)
+                .stopReason(stopAtStart != null ? stopAtStart : detectors.stopReason())
+                .build();
+        return new RunResult(sc, names(net.species()), net.depositMetals().stream().map(m -> m.symbol()).toList(),
+                net.cathodeSlots.stream().map(s -> s.reaction().name()).toList(),
+                net.anodeSlots.stream().map(s -> s.reaction().name()).toList(),
+                List.copyOf(trace), List.copyOf(events), summary, y.clone(), counted.count);
+    }
+
+    private static List<String> names(List<org.cellwright.chem.Species> species) {
+        return species.stream().map(org.cellwright.chem.Species::name).toList();
+    }
+
+    /** Schedule times at which the set value steps, then the end. */
+    private static TreeSet<Double> breakpoints(Scenario sc) {
+        TreeSet<Double> points = new TreeSet<>();
+        double duration = sc.run().durationS();
+        for (SetPoint p : sc.supply().schedule()) {
+            if (p.atS() > 0 && p.atS() < duration) {
+                points.add(p.atS());
+            }
+        }
+        points.add(duration);
+        return points;
+    }
+
+    private static double[] absoluteTolerances(Scenario sc, StateLayout layout) {
+        double[] abs = new double[layout.size];
+        double maxC = sc.electrolyte().compositionMolPerM3().values().stream().mapToDouble(Double::doubleValue)
+                .max().orElse(1.0);
+        java.util.Arrays.fill(abs, 0, layout.species, Math.max(maxC, 1.0) * 1e-9);
+        abs[layout.temperature] = 1e-6;
+        double molesScale = Math.max(maxC, 1.0) * sc.electrolyte().volumeM3();
+        for (int i = layout.deposit0; i < layout.size; i++) {
+            abs[i] = molesScale * 1e-9;
+        }
+        abs[layout.charge] = 1e-6;
+        abs[layout.energy] = 1e-6;
+        abs[layout.voltageTime] = 1e-6;
+        abs[layout.dendrite] = 1e-12;
+        for (int i = layout.reactionCharge0; i < layout.size; i++) {
+            abs[i] = 1e-6;
+        }
+        return abs;
+    }
+
+    /** Counts evaluations of the rates (the cost of a run). */
+    static final class CountingEquations implements FirstOrderDifferentialEquations {
+        private final FirstOrderDifferentialEquations inner;
+        long count;
+
+        CountingEquations(FirstOrderDifferentialEquations inner) {
+            this.inner = inner;
+        }
+
+        @Override
+        public int getDimension() {
+            return inner.getDimension();
+        }
+
+        @Override
+        public void computeDerivatives(double t, double[] y, double[] yDot) {
+            count++;
+            inner.computeDerivatives(t, y, yDot);
+        }
+    }
+}

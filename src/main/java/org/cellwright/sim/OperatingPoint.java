@@ -1,0 +1,215 @@
+package org.cellwright.sim;
+
+import java.util.List;
+
+import org.apache.commons.math3.analysis.solvers.BrentSolver;
+import org.cellwright.cell.ControlMode;
+import org.cellwright.cell.PowerSupply;
+import org.cellwright.cell.Scenario;
+import org.cellwright.chem.Metal;
+import org.cellwright.chem.Participant;
+import org.cellwright.chem.Phase;
+import org.cellwright.chem.PhysicalConstants;
+
+/**
+ * The algebraic part of the model: for a given state, the current the supply drives, the electrode
+ * potentials, every partial current and the cell voltage.
+ *
+ * <p>Cell voltage {@code U = E_a - E_c + I (R_gap + R_contacts)} with
+ * {@code R_gap = gap / (kappa (1 - eps)^1.5 A)} (Bruggeman 1935, applied to gas-evolving cells by Tobias,
+ * J. Electrochem. Soc. 106 (1959) 833). The gas void fraction follows the gas made:
+ * {@code eps = Qg / (Qg + u_rise * gap * w)}, with Qg the volume rate of gas (m3/s), u_rise the rise speed
+ * of bubbles and w the electrode width (square electrodes). A bench supply in current control holds its
+ * set current unless the cell would need more than its voltage limit; then the current solves
+ * {@code U(I) = U_limit} (U rises monotonically with I). In voltage control the current solves
+ * {@code U(I) = U_set}, capped by the current limit.
+ *
+ * <p>Mutable workspace, one per running simulation.
+ */
+final class OperatingPoint {
+
+    /** Bubble rise speed in the gap (m/s); physics reference: 1-10 cm/s (from memory, low confidence). */
+    static final double BUBBLE_RISE_M_PER_S = 0.05;
+    /** Deposit thickness over which the deposit covers the substrate (m); common practice: about 1 um. */
+    static final double COVERAGE_THICKNESS_M = 1e-6;
+    /** Ion product of water at 25 C ((mol/m3)^2); CRC Handbook, ionization constant of water, 1.008e-14 (mol/L)^2. */
+    static final double WATER_ION_PRODUCT = 1.008e-8;
+
+    final ReactionNetwork net;
+    final StateLayout layout;
+    final ElectrodeKinetics cathode;
+    final ElectrodeKinetics anode;
+    final BathProperties props;
+    private final PowerSupply supply;
+    final double cathodeAreaM2;
+    final double anodeAreaM2;
+    final double ohmicAreaM2;
+    final double gapM;
+    final double contactOhm;
+    private final double steadyLayerM;
+    private final double electrodeWidthM;
+    private final double[] gasPerCharge;
+    private final BrentSolver brent = new BrentSolver(1e-12, 1e-10);
+
+    final double[] c;
+    final double[] km;
+    final double[] cathodeI;
+    final double[] anodeI;
+    double tempK;
+    double kappa;
+    double currentA;
+    double cellVoltageV;
+    double cathodeE;
+    double anodeE;
+    double voidFraction;
+    double rGap;
+    double rGapNoGas;
+    boolean limited;
+    double coverage;
+    double dendriteM;
+
+    OperatingPoint(Scenario sc, ReactionNetwork net, StateLayout layout) {
+        this.net = net;
+        this.layout = layout;
+        this.supply = sc.supply();
+        this.cathodeAreaM2 = sc.cathode().areaM2();
+        this.anodeAreaM2 = sc.anode().areaM2();
+        this.ohmicAreaM2 = Math.sqrt(cathodeAreaM2 * anodeAreaM2);
+        this.gapM = sc.cell().gapM();
+        this.contactOhm = sc.cell().contactResistanceOhm();
+        this.steadyLayerM = sc.cell().agitation().diffusionLayerM();
+        this.electrodeWidthM = Math.sqrt(ohmicAreaM2);
+        this.props = new BathProperties(net.species(), sc.electrolyte().conductivitySPerM(),
+                sc.electrolyte().temperatureK());
+        this.cathode = new ElectrodeKinetics(net.cathodeSlots, -0.2);
+        this.anode = new ElectrodeKinetics(net.anodeSlots, 1.0);
+        int n = net.species().size();
+        c = new double[n];
+        km = new double[n];
+        cathodeI = new double[net.cathodeSlots.size()];
+        anodeI = new double[net.anodeSlots.size()];
+        gasPerCharge = new double[cathodeI.length + anodeI.length];
+        for (int k = 0; k < gasPerCharge.length; k++) {
+            ReactionSlot s = slot(k);
+            for (Participant p : s.reaction().participants()) {
+                if (p.phase() == Phase.GAS) {
+                    gasPerCharge[k] = Math.abs(p.coefficient()) / (s.n() * PhysicalConstants.FARADAY);
+                }
+            }
+        }
+    }
+
+    ReactionSlot slot(int k) {
+        int nc = cathodeI.length;
+        return k < nc ? net.cathodeSlots.get(k) : net.anodeSlots.get(k - nc);
+    }
+
+    /** Unpacks the state into concentrations, temperature and mass-transfer coefficients. */
+    void unpack(double t, double[] y) {
+        for (int j = 0; j < c.length; j++) {
+            c[j] = Math.max(y[j], 0);
+        }
+        if (net.waterEquilibrium()) {
+            double h = y[net.hIndex];
+            double hPlus = h >= 0 ? 0.5 * (h + Math.sqrt(h * h + 4 * WATER_ION_PRODUCT))
+                    : 2 * WATER_ION_PRODUCT / (-h + Math.sqrt(h * h + 4 * WATER_ION_PRODUCT));
+            c[net.hIndex] = hPlus;
+            c[net.ohIndex] = WATER_ION_PRODUCT / hPlus;
+        }
+        tempK = y[layout.temperature];
+        double tEff = Math.max(t, 1e-9);
+        for (int j = 0; j < c.length; j++) {
+            double d = props.diffusion(j, tempK);
+            double delta = Math.min(steadyLayerM, 2 * Math.sqrt(d * tEff / Math.PI));
+            km[j] = d / delta;
+        }
+        double thickness = 0;
+        List<Metal> metals = net.depositMetals();
+        for (int m = 0; m < metals.size(); m++) {
+            thickness += Math.max(y[layout.deposit0 + m], 0) * metals.get(m).molarVolumeM3PerMol();
+        }
+        thickness /= cathodeAreaM2;
+        coverage = 1 - Math.exp(-thickness / COVERAGE_THICKNESS_M);
+        dendriteM = y[layout.dendrite];
+        cathode.prepare(c, km, tempK, coverage);
+        anode.prepare(c, km, tempK, 0);
+        kappa = props.conductivity(c, tempK);
+    }
+
+    /** Solves the operating point of the supply at time {@code t} for the unpacked state. */
+    void solve(double t) {
+        double set = supply.setValueAt(t);
+        limited = false;
+        if (supply.mode() == ControlMode.CURRENT) {
+            double u = cellAt(set);
+            if (u > supply.voltageLimitV()) {
+                limited = true;
+                currentFor(supply.voltageLimitV(), set);
+            }
+        } else {
+            double i = currentFor(set, Double.POSITIVE_INFINITY);
+            if (i > supply.currentLimitA()) {
+                limited = true;
+                cellAt(supply.currentLimitA());
+            }
+        }
+    }
+
+    /** @return the cell voltage the set current needs, ignoring the supply's voltage limit (V) */
+    double voltageNeededAt(double t) {
+        return cellAt(supply.setValueAt(t));
+    }
+
+    /** @return the current the set voltage would drive, ignoring the supply's current limit (A) */
+    double currentNeededAt(double t) {
+        return currentFor(supply.setValueAt(t), Double.POSITIVE_INFINITY);
+    }
+
+    /**
+     * Sets the workspace to the cell at current {@code amps} and returns its terminal voltage.
+     *
+     * @param amps current through the cell (A), >= 0
+     * @return the cell voltage (V)
+     */
+    double cellAt(double amps) {
+        currentA = amps;
+        cathodeE = cathode.potentialFor(-amps / cathodeAreaM2);
+        anodeE = anode.potentialFor(amps / anodeAreaM2);
+        cathode.currents(cathodeE, cathodeI);
+        anode.currents(anodeE, anodeI);
+        double gasMolPerS = 0;
+        int nc = cathodeI.length;
+        for (int k = 0; k < gasPerCharge.length; k++) {
+            if (gasPerCharge[k] > 0) {
+                double amp = k < nc ? cathodeI[k] * cathodeAreaM2 : anodeI[k - nc] * anodeAreaM2;
+                gasMolPerS += Math.abs(amp) * gasPerCharge[k];
+            }
+        }
+        double gasM3PerS = gasMolPerS * BathProperties.gasMolarVolume(tempK);
+        voidFraction = gasM3PerS / (gasM3PerS + BUBBLE_RISE_M_PER_S * gapM * electrodeWidthM);
+        rGapNoGas = gapM / (kappa * ohmicAreaM2);
+        rGap = rGapNoGas / Math.pow(1 - voidFraction, 1.5);
+        cellVoltageV = anodeE - cathodeE + amps * (rGap + contactOhm);
+        return cellVoltageV;
+    }
+
+    /**
+     * Finds the current at which the cell voltage equals {@code volts}, between 0 and {@code maxAmps}, and
+     * leaves the workspace there.
+     */
+    private double currentFor(double volts, double maxAmps) {
+        if (cellAt(0) >= volts) {
+            return 0;
+        }
+        double hi = maxAmps;
+        if (Double.isInfinite(hi)) {
+            hi = Math.max(1e-3, volts / Math.max(rGapNoGas + contactOhm, 1e-9));
+            while (cellAt(hi) < volts) {
+                hi *= 2;
+            }
+        }
+        double root = brent.solve(500, amps -> cellAt(amps) - volts, 0, hi);
+        cellAt(root);
+        return root;
+    }
+}

@@ -1,0 +1,67 @@
+package org.cellwright.sim;
+
+import java.util.List;
+import java.util.function.ToDoubleBiFunction;
+
+import org.apache.commons.math3.ode.events.EventHandler;
+
+/**
+ * An event of a run: a continuous switching function {@code g(t, y)} whose zero the integrator locates by
+ * root finding, and what to do then (stop, or go on and record). Occurrences go to the run's event log.
+ */
+final class RunEventDetector implements EventHandler {
+
+    /** Describes an occurrence in plain words. */
+    interface Wording {
+        /**
+         * @param t time of the event (s)
+         * @param y state then
+         * @param increasing true when g rose through zero
+         * @return the event, or null to record nothing
+         */
+        RunEvent describe(double t, double[] y, boolean increasing);
+    }
+
+    private final ToDoubleBiFunction<Double, double[]> g;
+    private final boolean stop;
+    private final Wording wording;
+    private final List<RunEvent> log;
+    private boolean fired;
+
+    RunEventDetector(ToDoubleBiFunction<Double, double[]> g, boolean stop, Wording wording, List<RunEvent> log) {
+        this.g = g;
+        this.stop = stop;
+        this.wording = wording;
+        this.log = log;
+    }
+
+    /** @return true once the event has occurred */
+    boolean fired() {
+        return fired;
+    }
+
+    @Override
+    public void init(double t0, double[] y0, double t) {
+        // nothing to set up
+    }
+
+    @Override
+    public double g(double t, double[] y) {
+        return g.applyAsDouble(t, y);
+    }
+
+    @Override
+    public Action eventOccurred(double t, double[] y, boolean increasing) {
+        RunEvent e = wording.describe(t, y, increasing);
+        if (e != null) {
+            log.add(e);
+        }
+        fired = true;
+        return stop ? Action.STOP : Action.RESET_DERIVATIVES;
+    }
+
+    @Override
+    public void resetState(double t, double[] y) {
+        // the state does not jump
+    }
+}

@@ -1,0 +1,195 @@
+package org.cellwright.sim;
+
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Locale;
+
+import org.cellwright.cell.ControlMode;
+import org.cellwright.cell.Scenario;
+import org.cellwright.cell.StopCondition;
+
+/**
+ * The events a scenario asks for: its stop conditions, the supply's limits, and the target metal nearing
+ * its limiting current. Each is a {@link RunEventDetector} with a continuous switching function.
+ */
+final class RunEvents {
+
+    /** Share of the limiting current at which the run log says that mass transfer takes over. */
+    static final double NEAR_LIMIT = 0.9;
+
+    private final Scenario sc;
+    private final ReactionNetwork net;
+    private final CellRates rates;
+    private final OperatingPoint op;
+    private final List<RunEvent> log;
+    private final List<RunEventDetector> all = new ArrayList<>();
+    private final List<RunEventDetector> stops = new ArrayList<>();
+    private final List<String> stopReasons = new ArrayList<>();
+
+    RunEvents(Scenario sc, ReactionNetwork net, CellRates rates, List<RunEvent> log) {
+        this.sc = sc;
+        this.net = net;
+        this.rates = rates;
+        this.op = rates.operatingPoint();
+        this.log = log;
+        for (StopCondition s : sc.run().stops()) {
+            addStop(s);
+        }
+        addSupplyLimit();
+        addNearLimit();
+    }
+
+    List<RunEventDetector> all() {
+        return all;
+    }
+
+    boolean stopped() {
+        return stops.stream().anyMatch(RunEventDetector::fired);
+    }
+
+    String stopReason() {
+        for (int i = 0; i < stops.size(); i++) {
+            if (stops.get(i).fired()) {
+                return stopReasons.get(i);
+            }
+        }
+        return "end";
+    }
+
+    /** @return the stop reason when a stop condition already holds at the start, else null */
+    String stopAlreadyMet(double[] y0) {
+        for (int i = 0; i < stops.size(); i++) {
+            if (stops.get(i).g(0, y0) < 0) {
+                log.add(new RunEvent(0, RunEvent.Kind.SPECIES_TARGET,
+                        "A stop condition already holds at the start; nothing was run."));
+                return stopReasons.get(i);
+            }
+        }
+        return null;
+    }
+
+    private void addStop(StopCondition s) {
+        StateLayout layout = rates.layout();
+        RunEventDetector d;
+        String reason;
+        if (s instanceof StopCondition.SpeciesBelow sb) {
+            int j = net.indexOf(sb.species());
+            if (j < 0) {
+                throw new IllegalArgumentException("run.stop: species " + sb.species() + " is not in this bath");
+            }
+            d = new RunEventDetector((t, y) -> concentration(t, y, j) - sb.molPerM3(), true,
+                    (t, y, inc) -> new RunEvent(t, RunEvent.Kind.SPECIES_TARGET, String.format(Locale.ROOT,
+                            "At %s %s fell to %.4g mol/L; the run stops as asked.", RunClock.format(t),
+                            sb.species(), sb.molPerM3() / 1000)), log);
+            reason = "target";
+        } else if (s instanceof StopCondition.TemperatureAbove ta) {
+            d = new RunEventDetector((t, y) -> ta.kelvin() - y[layout.temperature], true,
+                    (t, y, inc) -> new RunEvent(t, RunEvent.Kind.TEMPERATURE_LIMIT, String.format(Locale.ROOT,
+                            "At %s the bath reached %.1f C; the run stops as asked.", RunClock.format(t),
+                            ta.kelvin() - 273.15)), log);
+            reason = "temperature_limit";
+        } else if (s instanceof StopCondition.VoltageAbove va) {
+            d = new RunEventDetector((t, y) -> va.volts() - cellVoltage(t, y), true,
+                    (t, y, inc) -> new RunEvent(t, RunEvent.Kind.VOLTAGE_STOP, String.format(Locale.ROOT,
+                            "At %s the cell voltage reached %.2f V; the run stops as asked.", RunClock.format(t),
+                            va.volts())), log);
+            reason = "voltage_limit";
+        } else if (s instanceof StopCondition.DepositAbove da) {
+            int m = metalIndex(da.metal());
+            d = new RunEventDetector((t, y) -> da.kg() - y[layout.deposit0 + m]
+                    * net.depositMetals().get(m).molarMassKgPerMol(), true,
+                    (t, y, inc) -> new RunEvent(t, RunEvent.Kind.DEPOSIT_TARGET, String.format(Locale.ROOT,
+                            "At %s the %s deposit reached %.4g g; the run stops as asked.", RunClock.format(t),
+                            da.metal(), da.kg() * 1000)), log);
+            reason = "target";
+        } else {
+            return;
+        }
+        all.add(d);
+        stops.add(d);
+        stopReasons.add(reason);
+    }
+
+    private int metalIndex(String symbol) {
+        for (int m = 0; m < net.depositMetals().size(); m++) {
+            if (net.depositMetals().get(m).symbol().equalsIgnoreCase(symbol)) {
+                return m;
+            }
+        }
+        throw new IllegalArgumentException("run.stop: metal " + symbol + " does not deposit from this bath");
+    }
+
+    private double concentration(double t, double[] y, int j) {
+        op.unpack(t, y);
+        return op.c[j];
+    }
+
+    private double cellVoltage(double t, double[] y) {
+        op.unpack(t, y);
+        op.solve(t);
+        return op.cellVoltageV;
+    }
+
+    private void addSupplyLimit() {
+        var supply = sc.supply();
+        if (supply.mode() == ControlMode.CURRENT && Double.isFinite(supply.voltageLimitV())) {
+            all.add(new RunEventDetector((t, y) -> {
+                op.unpack(t, y);
+                return supply.voltageLimitV() - op.voltageNeededAt(t);
+            }, false, (t, y, inc) -> inc
+                    ? new RunEvent(t, RunEvent.Kind.VOLTAGE_LIMIT_LEFT, String.format(Locale.ROOT,
+                    "At %s the cell again needs less than %.2f V: the supply is back to its set current.",
+                    RunClock.format(t), supply.voltageLimitV()))
+                    : new RunEvent(t, RunEvent.Kind.VOLTAGE_LIMIT_ENTERED, String.format(Locale.ROOT,
+                    "At %s the cell would need more than the supply's %.2f V limit: the supply now holds"
+                            + " %.2f V and the current falls below its set value.", RunClock.format(t),
+                    supply.voltageLimitV(), supply.voltageLimitV())), log));
+        }
+        if (supply.mode() == ControlMode.VOLTAGE && Double.isFinite(supply.currentLimitA())) {
+            all.add(new RunEventDetector((t, y) -> {
+                op.unpack(t, y);
+                return supply.currentLimitA() - op.currentNeededAt(t);
+            }, false, (t, y, inc) -> new RunEvent(t, inc ? RunEvent.Kind.CURRENT_LIMIT_LEFT
+                    : RunEvent.Kind.CURRENT_LIMIT_ENTERED, String.format(Locale.ROOT, inc
+                    ? "At %s the cell draws less than the %.2f A limit again: the supply holds its set voltage."
+                    : "At %s the cell would draw more than the %.2f A limit: the supply now holds that current.",
+                    RunClock.format(t), supply.currentLimitA())), log));
+        }
+    }
+
+    private void addNearLimit() {
+        if (net.targetSlot < 0) {
+            return;
+        }
+        ReactionSlot target = net.cathodeSlots.get(net.targetSlot);
+        String ion = target.oxIndex().length > 0 ? net.species().get(target.oxIndex()[0]).name() : "metal ion";
+        all.add(new RunEventDetector((t, y) -> NEAR_LIMIT - rates.snapshot(t, y).targetLimitRatio(), false,
+                (t, y, inc) -> {
+                    if (t <= 0) {
+                        return null;
+                    }
+                    if (inc) {
+                        return new RunEvent(t, RunEvent.Kind.BELOW_LIMITING_CURRENT, String.format(Locale.ROOT,
+                                "At %s the %s deposition falls back below %d %% of its limiting current.",
+                                RunClock.format(t), net.targetMetal.symbol(), Math.round(NEAR_LIMIT * 100)));
+                    }
+                    InstantState s = rates.snapshot(t, y);
+                    return new RunEvent(t, RunEvent.Kind.NEAR_LIMITING_CURRENT, String.format(Locale.ROOT,
+                            "At %s the %s supply to the cathode reaches %d %% of its limit (mass transfer);"
+                                    + " from here more and more of the current goes to %s.",
+                            RunClock.format(t), ion, Math.round(NEAR_LIMIT * 100), runnerUp(s)));
+                }, log));
+    }
+
+    private String runnerUp(InstantState s) {
+        int best = -1;
+        double max = 0;
+        for (int k = 0; k < s.cathodeCurrentsA().length; k++) {
+            if (k != net.targetSlot && -s.cathodeCurrentsA()[k] > max) {
+                max = -s.cathodeCurrentsA()[k];
+                best = k;
+            }
+        }
+        return best < 0 ? "side reactions" : PlainWords.of(net.cathodeSlots.get(best).reaction(), true);
+    }
+}

@@ -1,0 +1,165 @@
+package org.cellwright.sim;
+
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Locale;
+import java.util.Map;
+
+import org.cellwright.cell.Scenario;
+
+/**
+ * The cautions a run triggers (chlorine, hydrogen, acid, lead, electrical) and notes on the validity of the
+ * data and on hydrolysis or precipitation risk. Each caution defers to local codes, safety data sheets and
+ * licensed practice.
+ */
+final class RunWarnings {
+
+    /** Molar volume of an ideal gas at 0 C and 1 atm (L/mol); CODATA 2018: 22.413 969 54 L/mol. */
+    static final double STP_L_PER_MOL = 22.41396954;
+    /** Solubility product of PbSO4 at 25 C ((mol/L)^2); CRC Handbook, Solubility product constants: 2.53e-8. */
+    static final double KSP_PBSO4 = 2.53e-8;
+    /** Solubility product of PbCl2 at 25 C ((mol/L)^3); CRC Handbook, Solubility product constants: 1.70e-5. */
+    static final double KSP_PBCL2 = 1.70e-5;
+
+    private final Scenario sc;
+    private final ReactionNetwork net;
+    private final List<TracePoint> trace;
+    private final Map<String, Double> gasMol;
+    private final List<String> out = new ArrayList<>();
+
+    RunWarnings(Scenario sc, ReactionNetwork net, List<TracePoint> trace, Map<String, Double> gasMol) {
+        this.sc = sc;
+        this.net = net;
+        this.trace = trace;
+        this.gasMol = gasMol;
+    }
+
+    List<String> list() {
+        chlorine();
+        hydrogen();
+        acid();
+        lead();
+        electrical();
+        validity();
+        tinChemistry();
+        return out;
+    }
+
+    private double litres(String gas) {
+        return gasMol.getOrDefault(gas, 0.0) * STP_L_PER_MOL;
+    }
+
+    private double maxConcentration(String species) {
+        int j = net.indexOf(species);
+        if (j < 0) {
+            return 0;
+        }
+        double max = 0;
+        for (TracePoint p : trace) {
+            max = Math.max(max, p.state().concentrationsMolPerM3()[j]);
+        }
+        return max / 1000;
+    }
+
+    private double minConcentration(String species) {
+        int j = net.indexOf(species);
+        double min = Double.POSITIVE_INFINITY;
+        for (TracePoint p : trace) {
+            min = Math.min(min, p.state().concentrationsMolPerM3()[j]);
+        }
+        return min / 1000;
+    }
+
+    private void chlorine() {
+        double l = litres("Cl2");
+        if (l > 1e-4) {
+            out.add(String.format(Locale.ROOT, "Chlorine: the inert %s anode in a chloride bath gives off about %.3g L"
+                    + " of chlorine (0 C, 1 atm). Chlorine is a toxic gas: run under fume extraction and follow"
+                    + " local codes and the safety data sheets.", sc.anode().material(), l));
+        }
+    }
+
+    private void hydrogen() {
+        double l = litres("H2");
+        if (l > 1e-4) {
+            out.add(String.format(Locale.ROOT, "Hydrogen: the cathode gives off about %.3g L of hydrogen (0 C, 1 atm),"
+                    + " which forms explosive mixtures with air (4 to 75 %% by volume). Ventilate; keep sparks and"
+                    + " flames away from the cell.", l));
+        }
+    }
+
+    private void acid() {
+        double h = maxConcentration("H+");
+        if (h >= 0.05) {
+            out.add(String.format(Locale.ROOT, "Acid: the bath holds %.2g mol/L of acid, which burns skin and eyes."
+                    + " Wear eye protection, gloves and an apron; keep water and a neutraliser at hand.", h));
+        }
+    }
+
+    private void lead() {
+        boolean leadInBath = net.indexOf("Pb2+") >= 0 && maxConcentration("Pb2+") > 0;
+        boolean leadAnode = sc.anode().material().startsWith("lead") || sc.cathode().material().startsWith("lead");
+        if (leadInBath || leadAnode) {
+            out.add("Lead: lead and its salts are toxic. Keep the bath, sludge and rinse water out of drains,"
+                    + " wash hands, and follow local rules for lead-bearing waste.");
+        }
+        if (leadInBath) {
+            double pb = maxConcentration("Pb2+");
+            double so4 = maxConcentration("SO4^2-");
+            double cl = maxConcentration("Cl-");
+            if (pb * so4 > KSP_PBSO4) {
+                out.add("Precipitation: lead sulfate exceeds its solubility product here and will settle as sludge.");
+            }
+            if (pb * cl * cl > KSP_PBCL2) {
+                out.add("Precipitation: lead chloride exceeds its solubility product (about 10 g/L at 20 C) and may crystallise.");
+            }
+        }
+    }
+
+    private void electrical() {
+        double maxA = trace.stream().mapToDouble(p -> p.state().currentA()).max().orElse(0);
+        if (maxA >= 5) {
+            out.add(String.format(Locale.ROOT, "Electrical: up to %.3g A flows; a short between the electrodes can"
+                    + " overheat leads and the supply. Fuse the circuit and insulate the bus bars.", maxA));
+        }
+    }
+
+    private void validity() {
+        double tMin = trace.stream().mapToDouble(p -> p.state().temperatureK()).min().orElse(298.15) - 273.15;
+        double tMax = trace.stream().mapToDouble(p -> p.state().temperatureK()).max().orElse(298.15) - 273.15;
+        if (tMin < 10 || tMax > 70) {
+            out.add(String.format(Locale.ROOT, "Data validity: the bath runs at %.0f to %.0f C; the library's kinetic"
+                    + " and transport data are for about 10 to 70 C.", tMin, tMax));
+        }
+        double ionic = 0;
+        double[] c = trace.get(0).state().concentrationsMolPerM3();
+        for (int j = 0; j < c.length; j++) {
+            int z = net.species().get(j).charge();
+            ionic += 0.5 * z * z * c[j] / 1000;
+        }
+        if (ionic > 3) {
+            out.add(String.format(Locale.ROOT, "Data validity: the ionic strength (%.1f mol/L) is above the range"
+                    + " in which the conductivity model was checked (about 2 mol/L of a single salt or acid).", ionic));
+        }
+    }
+
+    private void tinChemistry() {
+        if (net.indexOf("Sn2+") >= 0 && maxConcentration("Sn2+") > 0) {
+            double acid = net.indexOf("H+") >= 0 ? minConcentration("H+") : 0;
+            boolean chloride = maxConcentration("Cl-") > 0.1;
+            double needed = chloride ? 0.3 : 0.03;
+            if (acid < needed) {
+                out.add(String.format(Locale.ROOT, "Hydrolysis: with %.2g mol/L of free acid, tin(II) may hydrolyse"
+                        + " to basic salts (turbidity, sludge); keep at least %.2g mol/L in a %s bath.", acid, needed,
+                        chloride ? "chloride" : "sulfate"));
+            }
+        }
+        if (net.indexOf("Sn4+") >= 0) {
+            double sn4 = maxConcentration("Sn4+") * 118.71;
+            if (sn4 > 1) {
+                out.add(String.format(Locale.ROOT, "Tin(IV) builds up to %.2g g/L: it steals cathode current (reduced"
+                        + " back to tin(II)) and hydrolyses to a stannic sludge.", sn4));
+            }
+        }
+    }
+}
