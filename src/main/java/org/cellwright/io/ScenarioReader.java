@@ -101,6 +101,9 @@ public final class ScenarioReader {
      * @throws ScenarioException with every problem, when there is at least one error
      */
     public Result parse(String text, String fileName, List<String> sets) throws ScenarioException {
+        if (text.startsWith("\uFEFF")) {
+            text = text.substring(1);
+        }
         ProblemLog log = new ProblemLog();
         TomlParseResult parsed = Toml.parse(text);
         if (parsed.hasErrors()) {

@@ -7,9 +7,9 @@ import java.util.Optional;
 /**
  * "Did you mean" suggestions: the closest known name by Levenshtein edit distance, ignoring case.
  *
- * <p>A name is suggested when it is at most 2 edits away and fewer edits than half the longer of the two
- * names (so that short unrelated words are not offered), or when it begins with what was written ("W" for
- * "W/K").
+ * <p>A name is suggested when it is one edit away (names of two characters or more), two edits away (names
+ * of five or more), or when it begins with what was written ("W" for "W/K"); shorter unrelated words are
+ * not offered.
  */
 public final class Spelling {
 
@@ -43,7 +43,8 @@ public final class Spelling {
             return Optional.empty();
         }
         int longer = Math.max(written.length(), best.length());
-        return bestDistance <= 2 && 2 * bestDistance < longer ? Optional.of(best) : Optional.empty();
+        boolean close = bestDistance == 1 && longer >= 2 || bestDistance == 2 && longer > 4;
+        return close ? Optional.of(best) : Optional.empty();
     }
 
     /** @return "; did you mean 'x'?" for the closest known name, or "" */

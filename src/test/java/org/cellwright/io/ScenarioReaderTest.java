@@ -252,6 +252,15 @@ class ScenarioReaderTest {
     }
 
     @Test
+    void byteOrderMarkAndWindowsLineEndingsKeepPositions() {
+        String text = "\uFEFF" + MINIMAL.replace("gap = \"3 cm\"", "gap = \"3 cn\"").replace("\n", "\r\n")
+                + "[supply]\r\ncurrent = \"1 A\"\r\n[run]\r\nduration = \"1 h\"\r\n";
+        ScenarioException e = assertThrows(ScenarioException.class, () -> reader.parse(text, "crlf.toml", List.of()));
+        assertEquals(List.of("crlf.toml:12:10: cell.gap: unit 'cn' is not a length; did you mean 'cm'?"),
+                e.errors().stream().map(Problem::format).toList());
+    }
+
+    @Test
     void missingFileIsABadInputProblem() {
         ScenarioException e = assertThrows(ScenarioException.class,
                 () -> reader.read(ScenarioFiles.path("valid").resolve("no-such.toml")));
