@@ -2,7 +2,6 @@ package org.cellwright.io;
 
 import java.io.IOException;
 import java.nio.charset.StandardCharsets;
-import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.HashMap;
 import java.util.List;
@@ -58,9 +57,13 @@ public final class ScenarioWriter {
         return w.out.toString();
     }
 
-    /** Writes the scenario to a file (UTF-8), concentrations in g/L where the library allows. */
+    /**
+     * Writes the scenario to a file (UTF-8, through a temporary sibling), concentrations in g/L where the
+     * library allows.
+     */
     public static void write(Scenario s, ChemLibrary library, Path file) throws IOException {
-        Files.writeString(file, write(s, library), StandardCharsets.UTF_8);
+        byte[] bytes = write(s, library).getBytes(StandardCharsets.UTF_8);
+        AtomicFile.write(file, out -> out.write(bytes));
     }
 
     private String concentration(String species, double molPerM3) {

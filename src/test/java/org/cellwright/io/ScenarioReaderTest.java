@@ -5,6 +5,8 @@ import static org.junit.jupiter.api.Assertions.assertNull;
 import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
+import java.nio.file.Files;
+import java.nio.file.Path;
 import java.util.List;
 import java.util.Map;
 
@@ -258,6 +260,22 @@ class ScenarioReaderTest {
         ScenarioException e = assertThrows(ScenarioException.class, () -> reader.parse(text, "crlf.toml", List.of()));
         assertEquals(List.of("crlf.toml:12:10: cell.gap: unit 'cn' is not a length; did you mean 'cm'?"),
                 e.errors().stream().map(Problem::format).toList());
+    }
+
+    /** The project's demo scenarios (scenarios/ at the project root) read without problems. */
+    @Test
+    void demoScenariosReadWithoutProblems() throws Exception {
+        Path dir = Path.of("scenarios");
+        List<Path> demos;
+        try (var files = Files.list(dir)) {
+            demos = files.filter(p -> p.toString().endsWith(".toml")).sorted().toList();
+        }
+        assertTrue(demos.size() >= 3, "demo scenarios in " + dir.toAbsolutePath());
+        for (Path demo : demos) {
+            ScenarioReader.Result r = reader.load(demo, List.of());
+            assertEquals(List.of(), r.warnings(), demo::toString);
+            assertEquals(r.scenario(), reader.parse(ScenarioWriter.write(r.scenario()), "w", List.of()).scenario());
+        }
     }
 
     @Test

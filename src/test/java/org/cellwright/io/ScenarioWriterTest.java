@@ -3,6 +3,7 @@ package org.cellwright.io;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
+import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.LinkedHashMap;
 import java.util.List;
@@ -23,6 +24,7 @@ import org.cellwright.cell.SetPoint;
 import org.cellwright.cell.SpeciesOverride;
 import org.cellwright.cell.StopCondition;
 import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
 import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.ValueSource;
 
@@ -86,6 +88,14 @@ class ScenarioWriterTest {
                 "contact_resistance = \"4 mohm\"", "heat_loss = \"2.5 W/K\"", "agitation = \"sparged\"")) {
             assertTrue(copper.contains(expected), () -> "missing " + expected + " in\n" + copper);
         }
+    }
+
+    @Test
+    void writesAFileThatReadsBack(@TempDir Path dir) throws Exception {
+        Scenario s = reader.read(ScenarioFiles.path("valid/copper-etchant-bleed.toml"));
+        Path file = dir.resolve("written.toml");
+        ScenarioWriter.write(s, LibraryFixture.library(), file);
+        assertEquals(s, reader.read(file));
     }
 
     /**
