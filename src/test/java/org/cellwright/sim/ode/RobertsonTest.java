@@ -18,9 +18,9 @@ class RobertsonTest {
     private static final double GLOBAL_TOLERANCE = 10.0 * RTOL;
 
     // source: Toronto stiff test set, problem D2 (Robertson with y2 scaled by 1e4 and y3 by 1e2), "true" solution at
-    // t = 40 in routine EVALU: 0.7158270687193941, 9.185534764557338e-2, 2.841637457458413e+1 (Enright and Pryce,
-    // "Two FORTRAN packages for assessing initial value methods", ACM TOMS 13 (1987) 1-27, Algorithm 648),
-    // unscaled here
+    // t = 40 in routine EVALU: 0.7158270687193941, 9.185534764557338e-2, 2.841637457458413e+1 (W. H. Enright and
+    // J. D. Pryce, Algorithm 648, ACM TOMS 13 (1987) no. 1, p. 28; as distributed with the DVODE_F90 stiff test
+    // driver), unscaled here
     private static final double[] AT_40 = {0.7158270687193941, 9.185534764557338e-6, 0.2841637457458413};
 
     // source: computed for this test with the RADAU5 algorithm of Hairer and Wanner (scipy 1.17
