@@ -115,6 +115,25 @@ public final class CellRates implements FirstOrderDifferentialEquations {
         }
     }
 
+    /** @return the index of a species slot the rates ignore (OH- when tied to H+ by water), or -1 */
+    int unusedSpecies() {
+        return net.waterEquilibrium() ? net.ohIndex : -1;
+    }
+
+    /** @return the components that must stay non-negative: concentrations (not the net acidity) and deposits */
+    int[] nonNegativeComponents() {
+        java.util.List<Integer> idx = new java.util.ArrayList<>();
+        for (int j = 0; j < layout.species; j++) {
+            if (!(net.waterEquilibrium() && j == net.hIndex)) {
+                idx.add(j);
+            }
+        }
+        for (int m = 0; m < layout.metals; m++) {
+            idx.add(layout.deposit0 + m);
+        }
+        return idx.stream().mapToInt(Integer::intValue).toArray();
+    }
+
     /** @return the state layout */
     StateLayout layout() {
         return layout;
