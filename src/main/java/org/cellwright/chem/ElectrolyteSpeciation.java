@@ -11,13 +11,14 @@ import org.apache.commons.math3.analysis.solvers.BrentSolver;
  *
  * <ul>
  *   <li>Bisulfate: {@code HSO4- = H+ + SO4^2-}, effective constant
- *       {@code log K2 = log K2° + 4 A sqrt(I) / (1 + sqrt(I)) + b I}, with {@code K2° = 10^-1.99} (CRC Handbook,
- *       "Dissociation constants of inorganic acids and bases", H2SO4 second step at 25 C, from memory),
- *       A = 0.509 (L/mol)^1/2 (Debye-Hückel constant of water at 25 C; Robinson &amp; Stokes, Electrolyte
- *       Solutions, 2nd ed. 1959, from memory) and b = 0.81 L/mol fitted to the CRC conductivities of sulfuric
- *       acid (docs/conductivity.md). The fitted b makes K2 an <em>effective</em> constant: above I of about 2
- *       mol/L it treats the acid as nearly fully dissociated, which is what its conductivity asks for, not what
- *       Raman spectra show. It is capped at 10^3.</li>
+ *       {@code log K2 = min(log K2° + 4 A sqrt(I) / (1 + sqrt(I)) + b I, -0.5)}, with {@code K2° = 10^-1.99}
+ *       (CRC Handbook, "Dissociation constants of inorganic acids and bases", H2SO4 second step at 25 C, from
+ *       memory), A = 0.509 (L/mol)^1/2 (Debye-Hückel constant of water at 25 C; Robinson &amp; Stokes,
+ *       Electrolyte Solutions, 2nd ed. 1959, from memory) and b = 1.5 L/mol fitted to the CRC conductivities of
+ *       sulfuric acid (docs/conductivity.md). K2 rises from 0.010 at infinite dilution to its cap 0.32 at
+ *       I of about 0.6 mol/L; the cap is of the order of the stoichiometric constants that Raman studies of
+ *       concentrated sulfuric acid give (from memory). It is an <em>effective</em> constant: fitted to
+ *       conductivity, not to spectra.</li>
  *   <li>Ion pairs of every divalent cation with sulfate, {@code M2+ + SO4^2- = MSO4(aq)}, with
  *       {@code log K = 2.36 - 8 A sqrt(I) / (1 + sqrt(I))} (CuSO4 association constant; Smith &amp; Martell,
  *       Critical Stability Constants, from memory; the first-row divalent sulfates lie at 2.2-2.4).</li>
@@ -36,8 +37,8 @@ public record ElectrolyteSpeciation(Map<String, Double> free, double pairedMolPe
     /** Debye-Hückel A of water at 25 C, (L/mol)^1/2, natural-log form divided by ln 10. */
     static final double DEBYE_HUCKEL_A = 0.509;
     static final double LOG_K2_STANDARD = -1.99;
-    static final double K2_IONIC_STRENGTH_SLOPE = 0.81;
-    static final double LOG_K2_CAP = 3.0;
+    static final double K2_IONIC_STRENGTH_SLOPE = 1.5;
+    static final double LOG_K2_CAP = -0.5;
     static final double LOG_K_PAIR_STANDARD = 2.36;
 
     public ElectrolyteSpeciation {
