@@ -41,7 +41,13 @@ public final class LibraryCommand implements Callable<Integer> {
 
     @Override
     public Integer call() throws JsonProcessingException {
-        ChemLibrary library = LibraryReader.builtIn();
+        ChemLibrary library;
+        try {
+            library = LibraryReader.builtIn();
+        } catch (IllegalStateException e) {
+            spec.commandLine().getErr().println("cellwright library: " + e.getMessage());
+            return Main.INTERNAL_FAILURE;
+        }
         PrintWriter out = spec.commandLine().getOut();
         if (json) {
             ObjectMapper mapper = new ObjectMapper().enable(SerializationFeature.INDENT_OUTPUT);
