@@ -21,7 +21,7 @@ import org.cellwright.sim.ode.Ros34Pw2Integrator;
 public final class CellSimulation {
 
     /** Relative tolerance of the integration. */
-    static final double REL_TOL = 1e-7;
+    static final double REL_TOL = 1e-5;
 
     /** Receives the time series point by point while the run goes (for live plots). */
     @FunctionalInterface
@@ -141,7 +141,7 @@ public final class CellSimulation {
         double[] abs = new double[layout.size];
         double maxC = sc.electrolyte().compositionMolPerM3().values().stream().mapToDouble(Double::doubleValue)
                 .max().orElse(1.0);
-        java.util.Arrays.fill(abs, 0, layout.species, Math.max(maxC, 1.0) * 1e-9);
+        java.util.Arrays.fill(abs, 0, layout.species, Math.max(maxC, 1.0) * 1e-8);
         abs[layout.temperature] = 1e-6;
         double molesScale = Math.max(maxC, 1.0) * sc.electrolyte().volumeM3();
         for (int i = layout.deposit0; i < layout.size; i++) {
