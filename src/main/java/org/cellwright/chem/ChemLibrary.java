@@ -104,6 +104,17 @@ public final class ChemLibrary {
     }
 
     /**
+     * The material a cathode surface becomes once the metal covers it (for its hydrogen kinetics): the first
+     * material in library order whose surface metal is {@code symbol} (pure metals come before alloys).
+     *
+     * @param symbol metal symbol ("Sn")
+     * @return the material ("tin"), if any
+     */
+    public Optional<ElectrodeMaterial> materialOfMetal(String symbol) {
+        return materials.values().stream().filter(m -> symbol != null && symbol.equals(m.surfaceMetal())).findFirst();
+    }
+
+    /**
      * Writes a couple "Ox/Red" with both sides in canonical notation, for those sides that name a known
      * species ("Cu++/Cu" becomes "Cu2+/Cu").
      */

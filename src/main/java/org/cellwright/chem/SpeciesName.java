@@ -87,6 +87,10 @@ public final class SpeciesName {
         }
         if (d < body.length() && d > 0 && body.length() - d == 1) {
             addFormatted(out, body.substring(0, d), sign * Integer.parseInt(body.substring(d)));
+        } else if (d > 0 && body.length() - d > 1) {
+            // "SO42-": the last digit is the charge, the ones before it belong to the formula
+            int chargeDigit = body.length() - 1;
+            addFormatted(out, body.substring(0, chargeDigit), sign * Integer.parseInt(body.substring(chargeDigit)));
         }
         addFormatted(out, body, sign);
         return out;

@@ -1,50 +1,58 @@
 package org.cellwright.sim;
 
-import org.cellwright.chem.PhysicalConstants;
-import org.cellwright.chem.Species;
-
 import java.util.List;
 
+import org.cellwright.chem.BathConductivity;
+import org.cellwright.chem.ChemLibrary;
+import org.cellwright.chem.PhysicalConstants;
+import org.cellwright.chem.Species;
+import org.cellwright.chem.WaterViscosity;
+
 /**
- * Transport properties of the bath that follow composition and temperature: diffusion coefficients and
- * the electrolytic conductivity.
+ * Transport properties of the bath that follow composition and temperature: diffusion coefficients
+ * (Stokes-Einstein with the viscosity of water) and the electrolytic conductivity (the library's model,
+ * {@link BathConductivity}, evaluated at every call so that the rates stay a smooth function of the state).
+ * A pinned conductivity follows temperature by Walden's rule, {@code kappa mu = const} (viscosity of water).
  */
 final class BathProperties {
 
-    private final List<Species> species;
+    /** Property evaluation is clamped to the liquid range of water (K). */
+    private static final double LOWEST_K = 273.15;
+    private static final double HIGHEST_K = 373.15;
+
     private final Double pinnedConductivity;
-    private final double pinnedAtK;
+    private final double pinnedMu;
+    private final double muRef;
+    private final BathConductivity conductivity;
 
-    BathProperties(List<Species> species, Double pinnedConductivitySPerM, double pinnedAtK) {
-        this.species = species;
+    BathProperties(ChemLibrary chem, List<Species> species, Double pinnedConductivitySPerM, double pinnedAtK) {
         this.pinnedConductivity = pinnedConductivitySPerM;
-        this.pinnedAtK = pinnedAtK;
+        this.pinnedMu = WaterViscosity.of(clamp(pinnedAtK));
+        this.muRef = WaterViscosity.of(PhysicalConstants.REFERENCE_TEMPERATURE_K);
+        this.conductivity = pinnedConductivitySPerM != null ? null
+                : new BathConductivity(chem, species.stream().map(Species::name).toList());
     }
 
-    /** @return the diffusion coefficient of species {@code j} at {@code tempK} (m2/s) */
-    double diffusion(int j, double tempK) {
-        return species.get(j).diffusionM2PerS() * viscosityRatio(tempK) * tempK / PhysicalConstants.REFERENCE_TEMPERATURE_K;
+    private static double clamp(double tempK) {
+        return Math.min(Math.max(tempK, LOWEST_K), HIGHEST_K);
     }
 
-    /** @return the conductivity of the bath (S/m) */
+    /**
+     * @param tempK temperature (K)
+     * @return the Stokes-Einstein factor {@code D(T)/D(25 C) = (T/298.15) mu(25 C)/mu(T)}
+     */
+    double diffusionFactor(double tempK) {
+        double t = clamp(tempK);
+        return (t / PhysicalConstants.REFERENCE_TEMPERATURE_K) * muRef / WaterViscosity.of(t);
+    }
+
+    /** @return the conductivity of the bath without gas (S/m) */
     double conductivity(double[] c, double tempK) {
+        double t = clamp(tempK);
         if (pinnedConductivity != null) {
-            return pinnedConductivity * viscosityRatio(tempK) / viscosityRatio(pinnedAtK);
+            return pinnedConductivity * pinnedMu / WaterViscosity.of(t);
         }
-        double sum = 0;
-        double ionic = 0;
-        for (int j = 0; j < c.length; j++) {
-            Species s = species.get(j);
-            sum += s.conductivitySM2PerMol() * c[j];
-            ionic += 0.5 * s.charge() * s.charge() * c[j] * 1e-3;
-        }
-        double sq = Math.sqrt(ionic);
-        return sum * (1 - 0.6 * sq / (1 + sq)) * viscosityRatio(tempK);
-    }
-
-    /** Water viscosity at 25 C over viscosity at T (interim Andrade-type fit; replaced by chem data). */
-    private static double viscosityRatio(double tempK) {
-        return Math.exp(1780.0 * (1 / PhysicalConstants.REFERENCE_TEMPERATURE_K - 1 / tempK));
+        return conductivity.of(c, t);
     }
 
     /** @return molar volume of an ideal gas at {@code tempK} and 1 atm (m3/mol) */

@@ -13,16 +13,17 @@ import org.cellwright.chem.PhysicalConstants;
  * {@code xi = -I_k / (n F)} mol/s in the reduction direction; a participant with signed coefficient
  * {@code nu} is made at {@code nu * xi} (Faraday's law). Dissolved species change by that over the volume;
  * metals deposit, anodes dissolve, gases leave, water is consumed. Homogeneous reactions follow mass action.
- * H+ and OH- are tied by water's ion product (their neutralisation is taken as instantaneous). Part of the
- * chlorine an inert anode evolves dissolves and may oxidise reductants in the bath before it degasses.
+ * H+ and OH- are tied by water's ion product (their neutralisation is taken as instantaneous). Dissolved
+ * chlorine (made at the anode until the bath is saturated) oxidises reductants or slowly degasses.
  * Heat: Joule heat in the gap plus the heat of every overpotential, less a loss to ambient through a lumped
  * conductance.
  */
 public final class CellRates implements FirstOrderDifferentialEquations {
 
-    /** Share of anodic chlorine that dissolves in the bath (model assumption, documented in docs/model.md). */
-    static final double CHLORINE_DISSOLVED_SHARE = 0.2;
-    /** First-order degassing rate of dissolved chlorine (1/s); model assumption. */
+    /**
+     * First-order loss of dissolved chlorine to the air (1/s): model assumption (gas sparging by the
+     * electrode gases and the free surface), documented in docs/model.md.
+     */
     static final double CHLORINE_DEGASSING_PER_S = 1e-3;
     /** Volumetric heat capacity of the bath (J/(m3 K)): water, 4.18 J/(g K) x 1.0 g/cm3 (CRC Handbook). */
     static final double HEAT_CAPACITY_J_PER_M3K = 4.18e6;
@@ -115,6 +116,25 @@ public final class CellRates implements FirstOrderDifferentialEquations {
         }
     }
 
+    /** @return the index of a species slot the rates ignore (OH- when tied to H+ by water), or -1 */
+    int unusedSpecies() {
+        return net.waterEquilibrium() ? net.ohIndex : -1;
+    }
+
+    /** @return the components that must stay non-negative: concentrations (not the net acidity) and deposits */
+    int[] nonNegativeComponents() {
+        java.util.List<Integer> idx = new java.util.ArrayList<>();
+        for (int j = 0; j < layout.species; j++) {
+            if (!(net.waterEquilibrium() && j == net.hIndex)) {
+                idx.add(j);
+            }
+        }
+        for (int m = 0; m < layout.metals; m++) {
+            idx.add(layout.deposit0 + m);
+        }
+        return idx.stream().mapToInt(Integer::intValue).toArray();
+    }
+
     /** @return the state layout */
     StateLayout layout() {
         return layout;
@@ -147,7 +167,6 @@ public final class CellRates implements FirstOrderDifferentialEquations {
         java.util.Arrays.fill(rate, 0);
         int nc = op.cathodeI.length;
         int slots = nc + op.anodeI.length;
-        double gasCl2 = 0;
         double heat = op.currentA * op.currentA * op.rGap;
         for (int k = 0; k < slots; k++) {
             ReactionSlot s = op.slot(k);
@@ -168,19 +187,14 @@ public final class CellRates implements FirstOrderDifferentialEquations {
             }
             yDot[layout.water] -= slotWater[k] * xi;
             if (slotGas[k] >= 0) {
-                double made = slotGasNu[k] * xi;
-                if (slotGas[k] == 2 && net.dissolvedChlorineIndex >= 0) {
-                    gasCl2 += made;
-                } else {
-                    yDot[layout.gas0 + slotGas[k]] += made;
-                }
+                yDot[layout.gas0 + slotGas[k]] += slotGasNu[k] * xi;
             }
         }
         if (net.dissolvedChlorineIndex >= 0) {
             int j = net.dissolvedChlorineIndex;
             double degas = CHLORINE_DEGASSING_PER_S * op.c[j];
-            rate[j] += CHLORINE_DISSOLVED_SHARE * gasCl2 / volumeM3 - degas;
-            yDot[layout.gas0 + 2] += (1 - CHLORINE_DISSOLVED_SHARE) * gasCl2 + degas * volumeM3;
+            rate[j] -= degas;
+            yDot[layout.gas0 + 2] += degas * volumeM3;
         }
         for (ReactionNetwork.PreparedHomogeneous h : net.homogeneous) {
             double r = h.reaction().rateConstant();

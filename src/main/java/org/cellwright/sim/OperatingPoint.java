@@ -79,7 +79,7 @@ final class OperatingPoint {
         this.contactOhm = sc.cell().contactResistanceOhm();
         this.steadyLayerM = sc.cell().agitation().diffusionLayerM();
         this.electrodeWidthM = Math.sqrt(ohmicAreaM2);
-        this.props = new BathProperties(net.species(), sc.electrolyte().conductivitySPerM(),
+        this.props = new BathProperties(net.chem, net.species(), sc.electrolyte().conductivitySPerM(),
                 sc.electrolyte().temperatureK());
         this.cathode = new ElectrodeKinetics(net.cathodeSlots, -0.2);
         this.anode = new ElectrodeKinetics(net.anodeSlots, 1.0);
@@ -118,8 +118,9 @@ final class OperatingPoint {
         }
         tempK = y[layout.temperature];
         double tEff = Math.max(t, 1e-9);
+        double dFactor = props.diffusionFactor(tempK);
         for (int j = 0; j < c.length; j++) {
-            double d = props.diffusion(j, tempK);
+            double d = net.species().get(j).diffusionM2PerS() * dFactor;
             double delta = Math.min(steadyLayerM, 2 * Math.sqrt(d * tEff / Math.PI));
             km[j] = d / delta;
         }

@@ -42,6 +42,7 @@ public final class ReactionNetwork {
     final int dissolvedChlorineIndex;
     final ElectrodeMaterial cathodeMaterial;
     final ElectrodeMaterial anodeMaterial;
+    final ChemLibrary chem;
 
     /**
      * A homogeneous reaction with state indices.
@@ -65,9 +66,10 @@ public final class ReactionNetwork {
         this.targetSlot = b.targetSlot;
         this.hIndex = indexOf("H+");
         this.ohIndex = indexOf("OH-");
-        this.dissolvedChlorineIndex = b.chlorineDissolves ? indexOf("Cl2") : -1;
+        this.dissolvedChlorineIndex = indexOf("Cl2");
         this.cathodeMaterial = b.cathodeMaterial;
         this.anodeMaterial = b.anodeMaterial;
+        this.chem = b.lib;
     }
 
     /** @return the dissolved species tracked, in state order */
@@ -135,7 +137,6 @@ public final class ReactionNetwork {
         Metal anodeMetal;
         Metal targetMetal;
         int targetSlot = -1;
-        boolean chlorineDissolves;
 
         Builder(ChemLibrary lib, Scenario sc) {
             this.lib = lib;
@@ -179,10 +180,6 @@ public final class ReactionNetwork {
                         }
                     }
                 }
-                if (chlorineCanDissolve(present)) {
-                    chlorineDissolves = true;
-                    grew |= present.add("Cl2");
-                }
             }
             for (String name : present) {
                 species.add(lib.findSpecies(name).orElseThrow());
@@ -205,21 +202,6 @@ public final class ReactionNetwork {
                 }
             }
             return new ReactionNetwork(this);
-        }
-
-        private boolean chlorineCanDissolve(Set<String> present) {
-            if (lib.findSpecies("Cl2").isEmpty() || !present.contains("Cl-") || anodeMaterial.isSoluble()) {
-                return false;
-            }
-            for (HomogeneousReaction h : lib.homogeneousReactions()) {
-                boolean usesCl2 = h.participants().stream().anyMatch(p -> p.name().equals("Cl2") && p.coefficient() < 0);
-                boolean othersPresent = h.participants().stream().filter(p -> p.coefficient() < 0 && !p.name().equals("Cl2"))
-                        .allMatch(p -> present.contains(p.name()));
-                if (usesCl2 && othersPresent) {
-                    return true;
-                }
-            }
-            return false;
         }
 
         private void addCathodeSlot(ElectrodeReaction r, boolean red, Set<String> present) {

@@ -163,7 +163,7 @@ final class RunEvents {
         }
         ReactionSlot target = net.cathodeSlots.get(net.targetSlot);
         String ion = target.oxIndex().length > 0 ? net.species().get(target.oxIndex()[0]).name() : "metal ion";
-        all.add(new RunEventDetector((t, y) -> NEAR_LIMIT - rates.snapshot(t, y).targetLimitRatio(), false,
+        all.add(new RunEventDetector((t, y) -> NEAR_LIMIT - limitRatio(t, y), false,
                 (t, y, inc) -> {
                     if (t <= 0) {
                         return null;
@@ -179,6 +179,12 @@ final class RunEvents {
                                     + " from here more and more of the current goes to %s.",
                             RunClock.format(t), ion, Math.round(NEAR_LIMIT * 100), runnerUp(s)));
                 }, log));
+    }
+
+    private double limitRatio(double t, double[] y) {
+        op.unpack(t, y);
+        op.solve(t);
+        return Math.max(0, -op.cathodeI[net.targetSlot] * op.cathode.invIlC[net.targetSlot]);
     }
 
     private String runnerUp(InstantState s) {
