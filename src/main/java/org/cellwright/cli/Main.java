@@ -15,7 +15,7 @@ import picocli.CommandLine.Command;
         versionProvider = VersionInfo.class,
         description = "Simulates an electrolytic cell: depletion, competing electrode reactions, mass transfer,"
                 + " ohmic loss, heating and the deposit.",
-        subcommands = {CommandLine.HelpCommand.class, LibraryCommand.class},
+        subcommands = {CommandLine.HelpCommand.class, LibraryCommand.class, CheckCommand.class},
         exitCodeListHeading = "%nExit codes:%n",
         exitCodeList = {"0:success", "1:internal failure", "2:bad input (file, value or option)"})
 public final class Main implements Callable<Integer> {
@@ -37,7 +37,7 @@ public final class Main implements Callable<Integer> {
     /** @return the configured command line (used by tests and by {@link #main}) */
     public static CommandLine commandLine() {
         CommandLine cl = new CommandLine(new Main());
-        cl.setExitCodeExceptionMapper(e -> INTERNAL_FAILURE);
+        cl.setExitCodeExceptionMapper(e -> e instanceof CommandLine.ParameterException ? BAD_INPUT : INTERNAL_FAILURE);
         return cl;
     }
 

@@ -18,6 +18,8 @@ import org.cellwright.cell.SetPoint;
 import org.cellwright.cell.SpeciesOverride;
 import org.cellwright.cell.StopCondition;
 import org.junit.jupiter.api.Test;
+import org.junit.jupiter.params.ParameterizedTest;
+import org.junit.jupiter.params.provider.ValueSource;
 
 /**
  * Reading valid scenario files: every key lands in the right record field in SI units, defaults are the
@@ -276,6 +278,18 @@ class ScenarioReaderTest {
             assertEquals(List.of(), r.warnings(), demo::toString);
             assertEquals(r.scenario(), reader.parse(ScenarioWriter.write(r.scenario()), "w", List.of()).scenario());
         }
+    }
+
+    /** The valid test scenarios also read with the built-in library (not only with the test fixture). */
+    @ParameterizedTest
+    @ValueSource(strings = {"tin-stripping-liquor.toml", "copper-etchant-bleed.toml", "nickel-voltage-control.toml",
+        "silver-plating-shop-units.toml", "defaults.toml"})
+    void validFilesReadWithTheBuiltInLibrary(String file) throws ScenarioException {
+        Scenario withFixture = read(file);
+        Scenario withBuiltIn = new ScenarioReader(LibraryReader.builtIn()).read(ScenarioFiles.path("valid/" + file));
+        assertEquals(withFixture.electrolyte().compositionMolPerM3().keySet(),
+                withBuiltIn.electrolyte().compositionMolPerM3().keySet());
+        assertEquals(withFixture.supply(), withBuiltIn.supply());
     }
 
     @Test
