@@ -125,6 +125,21 @@ class UnitParserTest {
         "0.8 l, VOLUME, 8e-4",
         "3 ma, CURRENT, 0.003",
         "20 asf, CURRENT_DENSITY, 215.27820833419443",
+        "2 kA, CURRENT, 2000",
+        "0.5 A/cm2, CURRENT_DENSITY, 5000",
+        "2 dm3, VOLUME, 0.002",
+        "5 cm3, VOLUME, 5e-6",
+        "50 mm2, AREA, 5e-5",
+        "250 mg, MASS, 2.5e-4",
+        "1.5 kg, MASS, 1.5",
+        "0.12 kg/mol, MOLAR_MASS, 0.12",
+        "1 S/cm, CONDUCTIVITY, 100",
+        "1400 uS/cm, CONDUCTIVITY, 0.14",
+        "60 L/h, VOLUME_FLOW, 1.6666666666666667e-5",
+        "5 mS m2/mol, MOLAR_CONDUCTIVITY, 0.005",
+        "2 kg/m3, MASS_CONCENTRATION, 2",
+        "3 mol/m3, AMOUNT_CONCENTRATION, 3",
+        "1 m3/s, VOLUME_FLOW, 1",
     })
     void metricUnits(String text, Dimension d, double expected) throws UnitException {
         assertExact(expected, si(text, d));
