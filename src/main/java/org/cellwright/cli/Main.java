@@ -15,7 +15,7 @@ import picocli.CommandLine.Command;
         versionProvider = VersionInfo.class,
         description = "Simulates an electrolytic cell: depletion, competing electrode reactions, mass transfer,"
                 + " ohmic loss, heating and the deposit.",
-        subcommands = {CommandLine.HelpCommand.class, LibraryCommand.class, CheckCommand.class},
+        subcommands = {CommandLine.HelpCommand.class, RunCommand.class, CheckCommand.class, LibraryCommand.class},
         exitCodeListHeading = "%nExit codes:%n",
         exitCodeList = {"0:success", "1:internal failure", "2:bad input (file, value or option)"})
 public final class Main implements Callable<Integer> {

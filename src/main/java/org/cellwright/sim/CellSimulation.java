@@ -51,6 +51,7 @@ public final class CellSimulation {
         java.util.Arrays.fill(rel, relTol);
         Ros34Pw2Integrator integrator = new Ros34Pw2Integrator(1e-12, maxStep, absTol, rel);
         integrator.setNonNegative(rates.nonNegativeComponents());
+        integrator.setClipWithinTolerance(false);
         return integrator;
     }
 

@@ -185,16 +185,20 @@ final class ElectrodeKinetics {
      * (Press et al., Numerical Recipes, 3rd ed. 2007, section 9.4, "rtsafe").
      *
      * @param target net current density (A/m2)
-     * @return the potential (V vs SHE), converged to 1e-12 V
+     * @return the potential (V vs SHE), at which the currents match the target to 1e-13 relative
      */
     double potentialFor(double target) {
         double e = hint;
         double lo = Double.NEGATIVE_INFINITY;
         double hi = Double.POSITIVE_INFINITY;
         double widen = 0.05;
+        double tolerance = 1e-13 * Math.max(Math.abs(target), 1e-3);
         for (int it = 0; it < 400; it++) {
             double fe = total(e, scratch) - target;
             double slope = scratch[0];
+            if (Math.abs(fe) <= tolerance) {
+                break;
+            }
             if (fe > 0) {
                 hi = e;
             } else if (fe < 0) {
@@ -208,17 +212,12 @@ final class ElectrodeKinetics {
                 if (!(next > lo && next < hi)) {
                     next = 0.5 * (lo + hi);
                 }
-                if (hi - lo < 1e-12) {
-                    e = 0.5 * (lo + hi);
+                if (hi - lo < 1e-15 * Math.max(1, Math.abs(e))) {
                     break;
                 }
             } else if (!Double.isFinite(next) || Math.abs(next - e) > widen) {
                 next = e + (fe > 0 ? -widen : widen);
                 widen = Math.min(widen * 2, 0.3);
-            }
-            if (Math.abs(next - e) < 1e-12) {
-                e = next;
-                break;
             }
             if (Math.abs(next) > 50) {
                 throw new IllegalStateException("no reaction at the " + slots.get(0).electrode().key()

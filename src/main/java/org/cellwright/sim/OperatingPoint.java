@@ -35,6 +35,13 @@ final class OperatingPoint {
     /** Ion product of water at 25 C ((mol/m3)^2); CRC Handbook, ionization constant of water, 1.008e-14 (mol/L)^2. */
     static final double WATER_ION_PRODUCT = 1.008e-8;
 
+    /**
+     * Temperatures handed to the physics are kept within these bounds (K): a trial stage of the integrator
+     * may step outside, and the step is then rejected by its error control rather than by a failure here.
+     */
+    static final double PHYSICS_MIN_K = 253.15;
+    static final double PHYSICS_MAX_K = 393.15;
+
     final ReactionNetwork net;
     final StateLayout layout;
     final ElectrodeKinetics cathode;
@@ -116,7 +123,7 @@ final class OperatingPoint {
             c[net.hIndex] = hPlus;
             c[net.ohIndex] = WATER_ION_PRODUCT / hPlus;
         }
-        tempK = y[layout.temperature];
+        tempK = Math.min(Math.max(y[layout.temperature], PHYSICS_MIN_K), PHYSICS_MAX_K);
         double tEff = Math.max(t, 1e-9);
         double dFactor = props.diffusionFactor(tempK);
         for (int j = 0; j < c.length; j++) {

@@ -72,6 +72,7 @@ public class Ros34Pw2Integrator extends AbstractIntegrator {
 
     private final StepSizeControl control;
     private int[] nonNegativeIndices = new int[0];
+    private boolean clipWithinTolerance = true;
     private boolean autonomous;
     private int maxJacobianAge = DEFAULT_MAX_JACOBIAN_AGE;
     private double initialStep = Double.NaN;
@@ -113,6 +114,16 @@ public class Ros34Pw2Integrator extends AbstractIntegrator {
             }
         }
         nonNegativeIndices = indices.clone();
+    }
+
+    /**
+     * Whether a flagged component that ends an accepted step between {@code -absTol_i} and 0 is set to 0
+     * (default true). Equations with conserved linear invariants (mass, charge) should turn this off: the
+     * clipping adds a little of the component, while the small excursion is harmless when the RHS clips its
+     * inputs itself.
+     */
+    public void setClipWithinTolerance(boolean clip) {
+        this.clipWithinTolerance = clip;
     }
 
     /** Declares that f does not depend on t explicitly, saving the df/dt difference (one RHS call per Jacobian). */
@@ -287,7 +298,7 @@ public class Ros34Pw2Integrator extends AbstractIntegrator {
 
             accepted++;
             double[] solution = step.solution;
-            for (int i = 0; i < flags.length; i++) {
+            for (int i = 0; clipWithinTolerance && i < flags.length; i++) {
                 if (flags[i] && solution[i] < 0.0) {
                     solution[i] = 0.0;
                 }

@@ -1,0 +1,119 @@
+package org.cellwright.cli;
+
+import java.io.IOException;
+import java.io.PrintWriter;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.concurrent.Callable;
+
+import org.cellwright.chart.ChartSheet;
+import org.cellwright.chart.ChartStyle;
+import org.cellwright.chart.SummaryText;
+import org.cellwright.chem.ChemLibrary;
+import org.cellwright.io.AtomicFile;
+import org.cellwright.io.LibraryReader;
+import org.cellwright.io.RunCsvWriter;
+import org.cellwright.io.RunJsonWriter;
+import org.cellwright.io.ScenarioException;
+import org.cellwright.io.ScenarioReader;
+import org.cellwright.sim.CellSimulation;
+import org.cellwright.sim.RunResult;
+
+import picocli.CommandLine;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Option;
+import picocli.CommandLine.Parameters;
+
+/**
+ * {@code run SCENARIO}: runs a scenario and prints its summary; optionally writes the summary JSON, the time
+ * series CSV and a chart sheet (PNG or SVG). Output files are written whole or not at all.
+ */
+@Command(name = "run",
+        mixinStandardHelpOptions = true,
+        description = "Runs a scenario through time and prints what comes out: deposit, efficiency, energy,"
+                + " cell voltage, gases, events and cautions.",
+        exitCodeListHeading = "%nExit codes:%n",
+        exitCodeList = {"0:success", "1:internal failure", "2:bad input (scenario, value or option)"})
+public final class RunCommand implements Callable<Integer> {
+
+    @Parameters(index = "0", paramLabel = "SCENARIO", description = "Scenario file (TOML).")
+    Path file;
+
+    @Option(names = "--json", paramLabel = "FILE",
+            description = "Write the summary as JSON to FILE, or to standard output with '-' (then nothing else goes there).")
+    String json;
+
+    @Option(names = "--csv", paramLabel = "FILE", description = "Write the time series as CSV.")
+    Path csv;
+
+    @Option(names = "--chart", paramLabel = "FILE", description = "Write a chart sheet; the extension (.png or .svg) picks the format.")
+    Path chart;
+
+    @Option(names = "--set", paramLabel = "KEY=VALUE",
+            description = "Override a scenario value, e.g. --set supply.current=\"3 A\" --set cell.gap=\"20 mm\" (repeatable).")
+    List<String> sets = new ArrayList<>();
+
+    @CommandLine.Spec
+    CommandLine.Model.CommandSpec spec;
+
+    @Override
+    public Integer call() {
+        PrintWriter out = spec.commandLine().getOut();
+        PrintWriter err = spec.commandLine().getErr();
+        try {
+            return run(out, err);
+        } catch (IOException e) {
+            err.println("cellwright run: cannot write output: " + e.getMessage());
+            return Main.BAD_INPUT;
+        } catch (RuntimeException e) {
+            err.println("cellwright run: internal failure: " + e);
+            return Main.INTERNAL_FAILURE;
+        } finally {
+            out.flush();
+            err.flush();
+        }
+    }
+
+    private int run(PrintWriter out, PrintWriter err) throws IOException {
+        if (chart != null && !(chart.toString().endsWith(".png") || chart.toString().endsWith(".svg"))) {
+            err.println("cellwright run: --chart " + chart + ": the file must end in .png or .svg");
+            return Main.BAD_INPUT;
+        }
+        ChemLibrary lib = LibraryReader.builtIn();
+        ScenarioReader.Result read;
+        try {
+            read = new ScenarioReader(lib).load(file, sets);
+        } catch (ScenarioException e) {
+            e.problems().forEach(p -> err.println(p.format()));
+            return Main.BAD_INPUT;
+        }
+        read.warnings().forEach(p -> err.println(p.format()));
+        RunResult result;
+        try {
+            result = CellSimulation.withDefaults().run(read.scenario(), lib, null);
+        } catch (IllegalArgumentException e) {
+            err.println(file + ": " + e.getMessage());
+            return Main.BAD_INPUT;
+        }
+        String label = file.getFileName().toString();
+        boolean jsonToStdout = "-".equals(json);
+        if (json != null && !jsonToStdout) {
+            AtomicFile.write(Path.of(json), o -> RunJsonWriter.write(label, result, o));
+        }
+        if (csv != null) {
+            AtomicFile.write(csv, o -> RunCsvWriter.write(result, o));
+        }
+        if (chart != null) {
+            ChartSheet.of(result, ChartStyle.light()).export(chart);
+        }
+        if (jsonToStdout) {
+            java.io.ByteArrayOutputStream buffer = new java.io.ByteArrayOutputStream();
+            RunJsonWriter.write(label, result, buffer);
+            out.print(buffer.toString(java.nio.charset.StandardCharsets.UTF_8));
+        } else {
+            SummaryText.lines(label, result).forEach(out::println);
+        }
+        return 0;
+    }
+}
