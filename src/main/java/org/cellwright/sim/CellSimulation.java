@@ -76,7 +76,8 @@ public final class CellSimulation {
         ReactionNetwork net = ReactionNetwork.of(chem, sc);
         CellRates rates = new CellRates(sc, net);
         StateLayout layout = rates.layout();
-        CountingEquations counted = new CountingEquations(rates, absoluteTolerances(sc, rates.layout()));
+        CountingEquations counted = new CountingEquations(rates, absoluteTolerances(sc, rates.layout()),
+                new ConservedQuantities(net, rates.layout(), sc.electrolyte().volumeM3()));
         double duration = sc.run().durationS();
         double[] absTol = absoluteTolerances(sc, layout);
         FirstOrderIntegrator integrator = integrators.create(rates, absTol, REL_TOL,
@@ -172,8 +173,11 @@ public final class CellSimulation {
         private final double[] work;
         long count;
 
-        CountingEquations(CellRates inner, double[] absTol) {
+        private final ConservedQuantities invariants;
+
+        CountingEquations(CellRates inner, double[] absTol, ConservedQuantities invariants) {
             this.inner = inner;
+            this.invariants = invariants;
             StateLayout layout = inner.layout();
             this.active = layout.active(inner.unusedSpecies());
             this.scale = absTol.clone();
@@ -199,6 +203,7 @@ public final class CellSimulation {
                     dfdy[i][j] = (f1[i] - f0[i]) / h;
                 }
             }
+            invariants.project(dfdy);
         }
 
         @Override

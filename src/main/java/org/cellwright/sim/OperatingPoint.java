@@ -215,6 +215,8 @@ final class OperatingPoint {
             while (cellAt(hi) < volts) {
                 hi *= 2;
             }
+        } else if (cellAt(hi) <= volts) {
+            return hi;
         }
         double root = brent.solve(500, amps -> cellAt(amps) - volts, 0, hi);
         cellAt(root);

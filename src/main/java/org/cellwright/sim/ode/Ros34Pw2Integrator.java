@@ -117,8 +117,8 @@ public class Ros34Pw2Integrator extends AbstractIntegrator {
     }
 
     /**
-     * Whether a flagged component that ends an accepted step between {@code -absTol_i} and 0 is set to 0
-     * (default true). Equations with conserved linear invariants (mass, charge) should turn this off: the
+     * Whether a flagged component that ends an accepted step between {@code -absTol_i} and 0 is set to 0, and
+     * the dense output clipped at 0 likewise (default true). Equations with conserved linear invariants (mass, charge) should turn this off: the
      * clipping adds a little of the component, while the small excursion is harmless when the RHS clips its
      * inputs itself.
      */
@@ -214,7 +214,8 @@ public class Ros34Pw2Integrator extends AbstractIntegrator {
         JacobianEvaluator jacobians = new JacobianEvaluator(n, analytic, control.incrementFloors(primary, n));
         RightHandSide rhs = this::computeDerivatives;
         Ros34Pw2StepInterpolator interpolator = new Ros34Pw2StepInterpolator();
-        interpolator.reinitialize(yEnd, forward, equations.getPrimaryMapper(), equations.getSecondaryMappers(), flags);
+        interpolator.reinitialize(yEnd, forward, equations.getPrimaryMapper(), equations.getSecondaryMappers(),
+                clipWithinTolerance ? flags : new boolean[0]);
         interpolator.storeTime(equations.getTime());
 
         stepStart = equations.getTime();
