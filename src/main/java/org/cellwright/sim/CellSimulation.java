@@ -63,6 +63,18 @@ public final class CellSimulation {
     }
 
     /**
+     * The names behind the arrays of a run of this scenario, without running it.
+     *
+     * @param sc the scenario
+     * @param lib the chemistry library
+     * @return species, metals and reactions in array order
+     * @throws IllegalArgumentException when the scenario cannot run with this chemistry
+     */
+    public static RunLayout layout(Scenario sc, ChemLibrary lib) {
+        return RunLayout.of(ReactionNetwork.of(ScenarioChemistry.apply(lib, sc), sc));
+    }
+
+    /**
      * Runs a scenario.
      *
      * @param sc the scenario
@@ -116,14 +128,9 @@ public final class CellSimulation {
         RunSummary summary = new SummaryBuilder(sc, net, layout, trace, y, t)
                 .stopReason(stopAtStart != null ? stopAtStart : detectors.stopReason())
                 .build();
-        return new RunResult(sc, names(net.species()), net.depositMetals().stream().map(m -> m.symbol()).toList(),
-                net.cathodeSlots.stream().map(s -> s.reaction().name()).toList(),
-                net.anodeSlots.stream().map(s -> s.reaction().name()).toList(),
-                List.copyOf(trace), List.copyOf(events), summary, y.clone(), counted.count);
-    }
-
-    private static List<String> names(List<org.cellwright.chem.Species> species) {
-        return species.stream().map(org.cellwright.chem.Species::name).toList();
+        RunLayout names = RunLayout.of(net);
+        return new RunResult(sc, names.speciesNames(), names.metalSymbols(), names.cathodeReactions(),
+                names.anodeReactions(), List.copyOf(trace), List.copyOf(events), summary, y.clone(), counted.count);
     }
 
     /** Schedule times at which the set value steps, then the end. */
