@@ -8,6 +8,7 @@ import org.cellwright.cell.SpeciesOverride;
 import org.cellwright.chem.ChemLibrary;
 import org.cellwright.chem.ElectrodeReaction;
 import org.cellwright.chem.Kinetics;
+import org.cellwright.chem.ReactionEquation;
 import org.cellwright.chem.Species;
 
 /** Applies a scenario's species and reaction overrides to a chemistry library. */
@@ -51,9 +52,24 @@ public final class ScenarioChemistry {
                 base.elements(), base.sources());
     }
 
+    private static ElectrodeReaction newReaction(ChemLibrary lib, ReactionOverride o) {
+        if (o.equation() == null || o.e0V() == null || o.i0APerM2() == null) {
+            throw new IllegalArgumentException("reaction." + o.name()
+                    + ": a reaction not in the library needs equation, e0 and i0");
+        }
+        ReactionEquation eq = ReactionEquation.parseElectrode(o.equation(), lib);
+        double alphaA = o.alphaA() != null ? o.alphaA() : eq.electrons() / 2.0;
+        double alphaC = o.alphaC() != null ? o.alphaC() : eq.electrons() - alphaA;
+        Kinetics k = new Kinetics(o.i0APerM2(), alphaA, alphaC, "scenario file");
+        return new ElectrodeReaction(o.name(), o.equation(), eq.electrons(), eq.participants(), o.e0V(), 0, k,
+                o.material() == null ? Map.of() : Map.of(o.material(), k), Map.of("all", "scenario file"));
+    }
+
     private static ElectrodeReaction reaction(ChemLibrary lib, ReactionOverride o) {
-        ElectrodeReaction base = lib.findReaction(o.name()).orElseThrow(() -> new IllegalArgumentException(
-                "reaction." + o.name() + ": not in the library; new reactions are not supported yet"));
+        ElectrodeReaction base = lib.findReaction(o.name()).orElse(null);
+        if (base == null) {
+            return newReaction(lib, o);
+        }
         ElectrodeReaction r = o.e0V() != null ? base.withE0(o.e0V()) : base;
         if (o.i0APerM2() != null || o.alphaA() != null || o.alphaC() != null) {
             Kinetics k = r.kineticsOn(o.material());
