@@ -61,12 +61,28 @@ public record PowerSupply(ControlMode mode, double currentA, double voltageV, do
      * @return the set current (A) or set voltage (V)
      */
     public double setValueAt(double tS) {
+        return setValue(tS, false);
+    }
+
+    /**
+     * The set value just before time {@code tS}: equal to {@link #setValueAt} except at a step, where it is the
+     * value before the step (the left limit, for the end of an integration segment).
+     *
+     * @param tS time from the start (s)
+     * @return the set current (A) or set voltage (V)
+     */
+    public double setValueBefore(double tS) {
+        return setValue(tS, true);
+    }
+
+    private double setValue(double tS, boolean leftLimit) {
         if (schedule.isEmpty()) {
             return mode == ControlMode.CURRENT ? currentA : voltageV;
         }
         double value = schedule.get(0).value();
         for (int i = 0; i < schedule.size(); i++) {
             SetPoint p = schedule.get(i);
+            boolean reached = leftLimit ? tS > p.atS() : tS >= p.atS();
             if (p.ramp() && i > 0) {
                 SetPoint prev = schedule.get(i - 1);
                 if (tS >= p.atS()) {
@@ -77,7 +93,7 @@ public record PowerSupply(ControlMode mode, double currentA, double voltageV, do
                 } else {
                     break;
                 }
-            } else if (tS >= p.atS()) {
+            } else if (reached || (i == 0 && tS >= p.atS())) {
                 value = p.value();
             } else {
                 break;

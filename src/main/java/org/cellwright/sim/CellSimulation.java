@@ -110,6 +110,7 @@ public final class CellSimulation {
         String stopAtStart = detectors.stopAlreadyMet(y);
         if (stopAtStart == null) {
             for (double end : breakpoints(sc)) {
+                rates.operatingPoint().segmentEndS = end;
                 t = integrator.integrate(counted, t, y, end, y);
                 if (detectors.stopped() || t < end) {
                     break;
@@ -118,6 +119,7 @@ public final class CellSimulation {
         } else {
             recorder.record(0.0, y);
         }
+        rates.operatingPoint().segmentEndS = Double.POSITIVE_INFINITY;
         if (sampler.lastSentS() < t) {
             recorder.record(t, y);
         }

@@ -144,9 +144,16 @@ final class OperatingPoint {
         kappa = props.conductivity(c, tempK);
     }
 
+    /** End of the integration segment under way (s): at its end the set value is the left limit. */
+    double segmentEndS = Double.POSITIVE_INFINITY;
+
+    private double setValue(double t) {
+        return t >= segmentEndS ? supply.setValueBefore(t) : supply.setValueAt(t);
+    }
+
     /** Solves the operating point of the supply at time {@code t} for the unpacked state. */
     void solve(double t) {
-        double set = supply.setValueAt(t);
+        double set = setValue(t);
         limited = false;
         if (supply.mode() == ControlMode.CURRENT) {
             double u = cellAt(set);
@@ -165,12 +172,12 @@ final class OperatingPoint {
 
     /** @return the cell voltage the set current needs, ignoring the supply's voltage limit (V) */
     double voltageNeededAt(double t) {
-        return cellAt(supply.setValueAt(t));
+        return cellAt(setValue(t));
     }
 
     /** @return the current the set voltage would drive, ignoring the supply's current limit (A) */
     double currentNeededAt(double t) {
-        return currentFor(supply.setValueAt(t), Double.POSITIVE_INFINITY);
+        return currentFor(setValue(t), Double.POSITIVE_INFINITY);
     }
 
     /**
