@@ -231,7 +231,8 @@ public final class CellRates implements FirstOrderDifferentialEquations {
         bulk(op.c, rate, catholyteM3, yDot);
         if (layout.twoCompartments) {
             bulk(op.cA, rateA, anolyteM3, yDot);
-            op.compartments.fluxes(op.c, op.cA, op.currentA, op.diffusionFactor, flux);
+            // once shorted, the current passes through the dendrite, not through the solution
+            op.compartments.fluxes(op.c, op.cA, op.shorted ? 0 : op.currentA, op.diffusionFactor, flux);
             for (int j = 0; j < flux.length; j++) {
                 rate[j] += flux[j] / catholyteM3;
                 rateA[j] -= flux[j] / anolyteM3;

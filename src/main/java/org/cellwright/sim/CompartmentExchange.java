@@ -12,14 +12,15 @@ import org.cellwright.chem.Species;
  *
  * <p>The molar flow of species j from the anolyte to the catholyte (mol/s) is
  * <pre>
- *   N_j = K_j (cA_j - cC_j) + (I / F) t_j / z_j
+ *   N_j = K_j (cA_j - cC_j) + (I / F - q_x) t_j / z_j,   q_x = sum_k z_k K_k (cA_k - cC_k)
  *   t_j = z_j^2 D_j c_j / sum_k z_k^2 D_k c_k      (over the ions that cross; c upstream: cations from the
  *                                                  anolyte, anions from the catholyte)
  * </pre>
- * the exchange (diffusion or mixing) and the migration that carries the current (the transference numbers of
- * dilute-solution theory, Newman &amp; Thomas-Alyea, Electrochemical Systems, 3rd ed. 2004, ch. 11, with
- * Nernst-Einstein mobilities). Sum over j of {@code z_j F N_j} is the current, so each compartment stays
- * electroneutral. Exchange coefficients:
+ * the exchange (diffusion or mixing) and the migration in the field that carries the current, less the charge
+ * the exchange already carries (the diffusion potential), with the transference numbers of dilute-solution
+ * theory (Newman &amp; Thomas-Alyea, Electrochemical Systems, 3rd ed. 2004, ch. 11, with Nernst-Einstein
+ * mobilities). Sum over j of {@code z_j F N_j} is the current, so each compartment stays electroneutral.
+ * Exchange coefficients:
  * <ul>
  *   <li>diaphragm: {@code K_j = D_j(T) porosity^1.5 A_sep / thickness} (Bruggeman's tortuosity), every ion
  *       migrates;</li>
@@ -119,14 +120,8 @@ final class CompartmentExchange {
      * @param out receives N_j (mol/s), positive toward the catholyte
      */
     void fluxes(double[] cC, double[] cA, double amps, double diffusionFactor, double[] out) {
-        double sum = 0;
-        for (int j = 0; j < out.length; j++) {
-            if (crosses[j] && z[j] != 0) {
-                double up = z[j] > 0 ? cA[j] : cC[j];
-                sum += z[j] * z[j] * d25[j] * up;
-            }
-        }
-        double perCharge = sum > 0 ? amps / (PhysicalConstants.FARADAY * sum) : 0;
+        double carriers = 0;
+        double exchanged = 0;
         for (int j = 0; j < out.length; j++) {
             if (!crosses[j]) {
                 out[j] = 0;
@@ -134,12 +129,22 @@ final class CompartmentExchange {
             }
             double exchange = kind == Compartments.Kind.ZONES ? zoneFlowM3PerS
                     : d25[j] * diffusionFactor * diffusionGeometryM;
-            double n = exchange * (cA[j] - cC[j]);
+            out[j] = exchange * (cA[j] - cC[j]);
             if (z[j] != 0) {
                 double up = z[j] > 0 ? cA[j] : cC[j];
-                n += perCharge * z[j] * d25[j] * up;
+                carriers += z[j] * z[j] * d25[j] * up;
+                exchanged += z[j] * out[j];
             }
-            out[j] = n;
+        }
+        if (!(carriers > 0)) {
+            return;
+        }
+        double perCharge = (amps / PhysicalConstants.FARADAY - exchanged) / carriers;
+        for (int j = 0; j < out.length; j++) {
+            if (crosses[j] && z[j] != 0) {
+                double up = z[j] > 0 ? cA[j] : cC[j];
+                out[j] += perCharge * z[j] * d25[j] * up;
+            }
         }
     }
 }

@@ -13,15 +13,16 @@ import org.cellwright.chem.PhysicalConstants;
  * <pre>
  *   i_a = i0 exp( alpha_a F eta / RT),  i_c = i0 exp(-alpha_c F eta / RT)
  *   i0  = i0_ref a_O^(1-beta) a_R^beta,  beta = alpha_c / (alpha_a + alpha_c)
- *   i   = (i_a - i_c) / (1 + S_O + S_R),  S_j = sum over the branches that consume species j of i_branch / iL
+ *   i   = (i_a' - i_c') / (1 + i_a' / iL_a + i_c' / iL_c),  i_a' = i_a / (1 + X_R),  i_c' = i_c / (1 + X_O)
  * </pre>
- * with {@code iL = n F km c / nu} of the limiting dissolved species on each side. For one reaction this is
- * {@code (i_a - i_c) / (1 + i_a / iL_a + i_c / iL_c)} (Bard &amp; Faulkner, <i>Electrochemical Methods</i>,
- * 2nd ed., eqs. 3.4.10 and 1.4.x, first-order kinetics with a linear diffusion layer). When several branches
- * draw on the same species (Cu2+ to Cu and to Cu+; the deposit's reduction and another reaction's oxidation
- * of Sn2+), they share its one flux to the electrode: its surface concentration is
- * {@code c_b / (1 + S_j)} for all of them, so the flux is never counted twice and their total never exceeds
- * {@code km c}. Exponentials are formed in log space so that no depleted species gives NaN; a missing
+ * with {@code iL = n F km c / nu} of the limiting dissolved species on each side, and {@code X_j} the share of
+ * species j's mass-transfer flux that the other reactions' branches draw ({@code sum of i_branch / iL}). For
+ * one reaction ({@code X = 0}) this is {@code (i_a - i_c) / (1 + i_a / iL_a + i_c / iL_c)} (Bard &amp;
+ * Faulkner, <i>Electrochemical Methods</i>, 2nd ed., eqs. 3.4.10 and 1.4.x, first-order kinetics with a linear
+ * diffusion layer). When several branches draw on the same species (Cu2+ to Cu and to Cu+; Cu+ made by one
+ * and taken by the next) they share its one flux to the electrode: the expression is the exact solution of
+ * the surface balances of O and R when the other consumers are first order in them, so the flux is never
+ * counted twice and their total never exceeds {@code km c}. Exponentials are formed in log space so that no depleted species gives NaN; a missing
  * direction (gas or solid absent) has a zero branch. On the cathode, kinetics are a mix of the substrate's
  * and the deposit's by the fraction of the surface the deposit covers, and each deposited metal may
  * dissolve again from the share of the surface it covers (mixed-potential corrosion, Wagner &amp; Traud,
@@ -236,20 +237,28 @@ final class ElectrodeKinetics {
             }
         }
         for (int k = 0; k < count; k++) {
-            double den = 1;
-            double dDen = 0;
+            double xo = 0;
+            double dxo = 0;
+            double xr = 0;
+            double dxr = 0;
             if (limitOx[k] >= 0) {
-                den += share[limitOx[k]];
-                dDen += derivatives ? dShare[limitOx[k]] : 0;
+                xo = Math.max(share[limitOx[k]] - ic[k] * invIlC[k], 0);
+                dxo = derivatives ? dShare[limitOx[k]] - dic[k] * invIlC[k] : 0;
             }
             if (limitRed[k] >= 0) {
-                den += share[limitRed[k]];
-                dDen += derivatives ? dShare[limitRed[k]] : 0;
+                xr = Math.max(share[limitRed[k]] - ia[k] * invIlA[k], 0);
+                dxr = derivatives ? dShare[limitRed[k]] - dia[k] * invIlA[k] : 0;
             }
-            double num = ia[k] - ic[k];
+            double a = ia[k] / (1 + xr);
+            double c = ic[k] / (1 + xo);
+            double den = 1 + a * invIlA[k] + c * invIlC[k];
+            double num = a - c;
             cur[k] = num / den;
             if (derivatives) {
-                dcur[k] = ((dia[k] - dic[k]) * den - num * dDen) / (den * den);
+                double da = (dia[k] * (1 + xr) - ia[k] * dxr) / ((1 + xr) * (1 + xr));
+                double dc = (dic[k] * (1 + xo) - ic[k] * dxo) / ((1 + xo) * (1 + xo));
+                double dDen = da * invIlA[k] + dc * invIlC[k];
+                dcur[k] = ((da - dc) * den - num * dDen) / (den * den);
             }
         }
     }

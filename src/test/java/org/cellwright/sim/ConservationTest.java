@@ -158,6 +158,18 @@ class ConservationTest {
         }
         assertEquals(-charge, cathode, 1e-9 * scale, "cathode partial charges");
         assertEquals(charge, anode, 1e-9 * scale, "anode partial charges");
+        // each compartment stays electroneutral: what the electrodes take, migration brings back. Not one of the
+        // projected invariants, so the finite-difference Jacobian leaves it at the 1e-8 level: tolerance 1e-7
+        InstantState first = r.trace().get(0).state();
+        InstantState last = r.trace().get(r.trace().size() - 1).state();
+        double ions = ionic(net, first.concentrationsMolPerM3(), true);
+        assertEquals(ionic(net, first.concentrationsMolPerM3(), false), ionic(net, last.concentrationsMolPerM3(), false),
+                1e-7 * ions, "charge of the bath or catholyte");
+        if (first.anolyteConcentrationsMolPerM3() != null) {
+            assertEquals(ionic(net, first.anolyteConcentrationsMolPerM3(), false),
+                    ionic(net, last.anolyteConcentrationsMolPerM3(), false),
+                    1e-7 * Math.max(ions, ionic(net, first.anolyteConcentrationsMolPerM3(), true)), "charge of the anolyte");
+        }
         double total = sc.electrolyte().volumeM3();
         double anolyte = sc.cell().compartments().twoCompartments()
                 ? sc.cell().compartments().anolyteVolumeM3(total) : 0;
@@ -185,6 +197,16 @@ class ConservationTest {
             double moved = Math.abs(y[layout.charge]) / 96485.33212;
             assertEquals(b, a, 1e-9 * Math.max(Math.abs(b), moved), "element " + element);
         }
+    }
+
+    /** Sum of z c over the species (mol/m3 of charge), or of |z| c. */
+    private static double ionic(ReactionNetwork net, double[] c, boolean absolute) {
+        double sum = 0;
+        for (int j = 0; j < c.length; j++) {
+            int z = net.species().get(j).charge();
+            sum += (absolute ? Math.abs(z) : z) * c[j];
+        }
+        return sum;
     }
 
     private static double[] initial(Scenario sc, ReactionNetwork net, StateLayout layout) {
