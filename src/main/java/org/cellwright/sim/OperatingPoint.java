@@ -87,6 +87,7 @@ final class OperatingPoint {
     double waldenFactor;
     double diffusionFactor;
     boolean shorted;
+    private double shortAtS = Double.POSITIVE_INFINITY;
     private double shortPotentialV;
 
     OperatingPoint(Scenario sc, ReactionNetwork net, StateLayout layout) {
@@ -132,6 +133,7 @@ final class OperatingPoint {
 
     /** Unpacks the state into concentrations, temperature and mass-transfer coefficients. */
     void unpack(double t, double[] y) {
+        shorted = t >= shortAtS;
         unpackBlock(y, 0, c);
         if (compartments.twoCompartments()) {
             unpackBlock(y, layout.anolyte0, cA);
@@ -181,11 +183,13 @@ final class OperatingPoint {
     }
 
     /**
-     * From now on the cell is shorted by a dendrite: it conducts as a resistor and no electrode reaction runs.
-     * Both electrodes are left at the cathode's present potential.
+     * From time {@code t} on the cell is shorted by a dendrite: it conducts as a resistor and no electrode
+     * reaction runs. Both electrodes are left at the cathode's potential at that moment (the last one solved).
+     * Earlier times (the output sampled within the step that ended at the short) still see the open cell.
      */
-    void shortCircuit() {
+    void shortCircuit(double t) {
         shortPotentialV = cathodeE;
+        shortAtS = t;
         shorted = true;
     }
 

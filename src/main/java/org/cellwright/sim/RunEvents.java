@@ -64,7 +64,7 @@ final class RunEvents {
             op.unpack(t, y);
             op.solve(t);
             double amps = op.currentA;
-            op.shortCircuit();
+            op.shortCircuit(t);
             shortTimeS = t;
             return new RunEvent(t, RunEvent.Kind.SHORT_CIRCUIT, String.format(Locale.ROOT,
                     "At %s a %s dendrite reached the anode across the %.3g mm gap and shorted the cell%s",
