@@ -21,7 +21,7 @@ import org.cellwright.sim.ode.Ros34Pw2Integrator;
 public final class CellSimulation {
 
     /** Relative tolerance of the integration. */
-    static final double REL_TOL = 1e-5;
+    static final double REL_TOL = 1e-4;
 
     /** Receives the time series point by point while the run goes (for live plots). */
     @FunctionalInterface
