@@ -110,6 +110,9 @@ public final class CellSimulation {
         String stopAtStart = detectors.stopAlreadyMet(y);
         if (stopAtStart == null) {
             for (double end : breakpoints(sc)) {
+                if (t > 0) {
+                    detectors.scheduleStep(t, y, end);
+                }
                 rates.operatingPoint().segmentEndS = end;
                 t = integrator.integrate(counted, t, y, end, y);
                 if (detectors.stopped() || t < end) {

@@ -59,6 +59,8 @@ final class OperatingPoint {
     private final BrentSolver brent = new BrentSolver(1e-12, 1e-10);
 
     final double[] c;
+    /** Concentrations that set activities (mol/m3): as {@link #c}, with H+ free of bisulfate. */
+    final double[] free;
     final double[] km;
     final double[] cathodeI;
     final double[] anodeI;
@@ -92,6 +94,7 @@ final class OperatingPoint {
         this.anode = new ElectrodeKinetics(net.anodeSlots, 1.0);
         int n = net.species().size();
         c = new double[n];
+        free = new double[n];
         km = new double[n];
         cathodeI = new double[net.cathodeSlots.size()];
         anodeI = new double[net.anodeSlots.size()];
@@ -139,9 +142,13 @@ final class OperatingPoint {
         thickness /= cathodeAreaM2;
         coverage = 1 - Math.exp(-thickness / COVERAGE_THICKNESS_M);
         dendriteM = y[layout.dendrite];
-        cathode.prepare(c, km, tempK, coverage);
-        anode.prepare(c, km, tempK, 0);
         kappa = props.conductivity(c, tempK);
+        System.arraycopy(c, 0, free, 0, c.length);
+        if (net.hIndex >= 0) {
+            free[net.hIndex] = props.freeConcentration(net.hIndex, c[net.hIndex]);
+        }
+        cathode.prepare(c, free, km, tempK, coverage);
+        anode.prepare(c, free, km, tempK, 0);
     }
 
     /** End of the integration segment under way (s): at its end the set value is the left limit. */
