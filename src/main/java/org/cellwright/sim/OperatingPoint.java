@@ -42,6 +42,13 @@ final class OperatingPoint {
     static final double PHYSICS_MIN_K = 253.15;
     static final double PHYSICS_MAX_K = 393.15;
 
+    /**
+     * The diffusion layer is not thinner than it is one second after switch-on (s): at t = 0 it would be
+     * zero and mass transfer unlimited, a state no meter reads; from one second on the layer follows the
+     * planar-diffusion growth exactly, so Sand's transition times of a second and more are reproduced.
+     */
+    static final double FIRST_LAYER_S = 1.0;
+
     final ReactionNetwork net;
     final StateLayout layout;
     final ElectrodeKinetics cathode;
@@ -127,7 +134,7 @@ final class OperatingPoint {
             c[net.ohIndex] = WATER_ION_PRODUCT / hPlus;
         }
         tempK = Math.min(Math.max(y[layout.temperature], PHYSICS_MIN_K), PHYSICS_MAX_K);
-        double tEff = Math.max(t, 1e-9);
+        double tEff = Math.max(t, FIRST_LAYER_S);
         double dFactor = props.diffusionFactor(tempK);
         for (int j = 0; j < c.length; j++) {
             double d = net.species().get(j).diffusionM2PerS() * dFactor;
