@@ -10,11 +10,8 @@ import java.io.OutputStream;
 import java.io.OutputStreamWriter;
 import java.io.Writer;
 import java.nio.charset.StandardCharsets;
-import java.nio.file.AtomicMoveNotSupportedException;
 import java.nio.file.Files;
 import java.nio.file.Path;
-import java.nio.file.StandardCopyOption;
-import java.nio.file.StandardOpenOption;
 import java.util.Locale;
 
 import javax.imageio.ImageIO;
@@ -23,6 +20,7 @@ import javax.xml.parsers.ParserConfigurationException;
 
 import org.apache.batik.svggen.SVGGeneratorContext;
 import org.apache.batik.svggen.SVGGraphics2D;
+import org.cellwright.io.AtomicFile;
 import org.jfree.chart.ui.Drawable;
 import org.w3c.dom.Document;
 
@@ -105,28 +103,13 @@ public final class ChartExport {
         if (!(scale >= 1 && scale <= MAX_SCALE)) {
             throw new IllegalArgumentException("chart scale must be between 1 and " + MAX_SCALE + ", got " + scale);
         }
-        Path target = file.toAbsolutePath();
-        // Not Files.createTempFile: that makes the file readable by its owner only, and the export would
-        // keep those rights; a plain new file gets the usual rights of the folder's user.
-        Path tmp = target.resolveSibling("." + target.getFileName() + "." + Long.toHexString(System.nanoTime())
-                + ".part");
-        try {
-            try (OutputStream out = Files.newOutputStream(tmp, StandardOpenOption.CREATE_NEW,
-                    StandardOpenOption.WRITE)) {
-                if (f == Format.PNG) {
-                    writePng(drawing, width, height, scale, out);
-                } else {
-                    writeSvg(drawing, width, height, out);
-                }
+        AtomicFile.write(file, out -> {
+            if (f == Format.PNG) {
+                writePng(drawing, width, height, scale, out);
+            } else {
+                writeSvg(drawing, width, height, out);
             }
-            try {
-                Files.move(tmp, target, StandardCopyOption.ATOMIC_MOVE, StandardCopyOption.REPLACE_EXISTING);
-            } catch (AtomicMoveNotSupportedException e) {
-                Files.move(tmp, target, StandardCopyOption.REPLACE_EXISTING);
-            }
-        } finally {
-            Files.deleteIfExists(tmp);
-        }
+        });
     }
 
     /**

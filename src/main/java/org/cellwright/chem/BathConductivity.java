@@ -29,6 +29,10 @@ public final class BathConductivity {
     private final double[] free;
     private final double muRef;
     private double lastIonic = Double.NaN;
+    private boolean hasHydrogen;
+    private double hTotal;
+    private double sTotal;
+    private double metalTotal;
 
     /**
      * @param library species data
@@ -101,32 +105,11 @@ public final class BathConductivity {
             if (!Double.isNaN(lastIonic)) {
                 ionic = lastIonic;
             }
-            boolean hasHydrogen = hydrogen >= 0 && (h > 0 || total[hydrogen] > 0 || hydrogen < inputs);
-            for (int iteration = 0; iteration < 200; iteration++) {
-                double k2 = bisulfate >= 0 ? ElectrolyteSpeciation.bisulfateConstant(ionic) : Double.POSITIVE_INFINITY;
-                double kPair = ElectrolyteSpeciation.pairConstant(ionic);
-                double freeSulfate = freeSulfate(s, h, k2, kPair, metals);
-                double bi = Double.isInfinite(k2) ? 0 : h * freeSulfate / (k2 + freeSulfate);
-                double pairShare = kPair * freeSulfate / (1 + kPair * freeSulfate);
-                for (int i = 0; i < size; i++) {
-                    if (divalent[i]) {
-                        free[i] = total[i] - total[i] * pairShare;
-                    }
-                }
-                free[sulfate] = freeSulfate;
-                if (hasHydrogen) {
-                    free[hydrogen] = h - bi;
-                }
-                if (bisulfate >= 0) {
-                    free[bisulfate] = bi;
-                }
-                double next = ionicStrength(free);
-                boolean converged = Math.abs(next - ionic) <= 1e-12 * (1 + ionic);
-                ionic = 0.5 * (ionic + next);
-                if (converged) {
-                    break;
-                }
-            }
+            hasHydrogen = hydrogen >= 0 && (h > 0 || total[hydrogen] > 0 || hydrogen < inputs);
+            hTotal = h;
+            sTotal = s;
+            metalTotal = metals;
+            ionic = solveIonicStrength(ionic);
             lastIonic = ionic;
         }
         double viscosityRatio = muRef / WaterViscosity.of(tempK);
@@ -144,6 +127,74 @@ public final class BathConductivity {
             kappa += c * 1000.0 * lambda0[i] * Math.pow(viscosityRatio, exponent[i]) / correction;
         }
         return kappa;
+    }
+
+    /**
+     * The ionic strength at which the speciation reproduces itself: the fixed point of {@link #speciate},
+     * found by secant steps on {@code speciate(I) - I} from the warm start, with the reference model's damped
+     * iteration as the fallback. Leaves the free composition of the fixed point in {@code free}.
+     */
+    private double solveIonicStrength(double start) {
+        double i0 = start;
+        double r0 = speciate(i0) - i0;
+        if (Math.abs(r0) <= 1e-13 * (1 + i0)) {
+            return i0;
+        }
+        double i1 = i0 + r0;
+        for (int iteration = 0; iteration < 50; iteration++) {
+            double r1 = speciate(i1) - i1;
+            if (Math.abs(r1) <= 1e-13 * (1 + i1)) {
+                return i1;
+            }
+            double next = r1 != r0 ? i1 - r1 * (i1 - i0) / (r1 - r0) : i1 + r1;
+            if (!(next >= 0) || !Double.isFinite(next)) {
+                break;
+            }
+            i0 = i1;
+            r0 = r1;
+            i1 = next;
+        }
+        double ionic = start;
+        for (int iteration = 0; iteration < 400; iteration++) {
+            double next = speciate(ionic);
+            boolean converged = Math.abs(next - ionic) <= 1e-12 * (1 + ionic);
+            ionic = 0.5 * (ionic + next);
+            if (converged) {
+                break;
+            }
+        }
+        speciate(ionic);
+        return ionic;
+    }
+
+    /** Speciates at ionic strength {@code ionic} (mol/L), fills {@code free}, returns the free ions' ionic strength. */
+    private double speciate(double ionic) {
+        double k2 = bisulfate >= 0 ? ElectrolyteSpeciation.bisulfateConstant(ionic) : Double.POSITIVE_INFINITY;
+        double kPair = ElectrolyteSpeciation.pairConstant(ionic);
+        double freeSulfate = freeSulfate(sTotal, hTotal, k2, kPair, metalTotal);
+        double bi = Double.isInfinite(k2) ? 0 : hTotal * freeSulfate / (k2 + freeSulfate);
+        double pairShare = kPair * freeSulfate / (1 + kPair * freeSulfate);
+        for (int i = 0; i < size; i++) {
+            if (divalent[i]) {
+                free[i] = total[i] - total[i] * pairShare;
+            }
+        }
+        free[sulfate] = freeSulfate;
+        if (hasHydrogen) {
+            free[hydrogen] = hTotal - bi;
+        }
+        if (bisulfate >= 0) {
+            free[bisulfate] = bi;
+        }
+        return ionicStrength(free);
+    }
+
+    /**
+     * @param i index of a species in the order given at construction
+     * @return its free concentration after the last {@link #of} call (mol/m3)
+     */
+    public double freeMolPerM3(int i) {
+        return Math.max(0, free[i]) * 1000.0;
     }
 
     private static double get(double[] a, int i) {

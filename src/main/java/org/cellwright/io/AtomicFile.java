@@ -6,6 +6,7 @@ import java.nio.file.AtomicMoveNotSupportedException;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.nio.file.StandardCopyOption;
+import java.nio.file.StandardOpenOption;
 
 /**
  * Writes a file through a temporary sibling and renames it into place, so that a reader never sees a
@@ -37,9 +38,11 @@ public final class AtomicFile {
         if (dir != null && !Files.isDirectory(dir)) {
             throw new IOException("folder does not exist: " + dir);
         }
-        Path tmp = Files.createTempFile(dir, "." + abs.getFileName(), ".part");
+        // Not Files.createTempFile: that makes the file readable by its owner only, and the result would keep
+        // those rights; a plain new file gets the usual rights of the folder's user.
+        Path tmp = abs.resolveSibling("." + abs.getFileName() + "." + Long.toHexString(System.nanoTime()) + ".part");
         try {
-            try (OutputStream out = Files.newOutputStream(tmp)) {
+            try (OutputStream out = Files.newOutputStream(tmp, StandardOpenOption.CREATE_NEW, StandardOpenOption.WRITE)) {
                 content.writeTo(out);
             }
             try {

@@ -114,14 +114,16 @@ final class ElectrodeKinetics {
     /**
      * Prepares the constants of every reaction for the present composition.
      *
-     * @param c bulk concentrations (mol/m3), non-negative
+     * @param c bulk concentrations (mol/m3), non-negative, for the limiting currents
+     * @param free the concentrations that set activities (mol/m3): the free ions (H+ after the bisulfate
+     *     equilibrium)
      * @param km mass-transfer coefficient of each species (m/s)
      * @param tempK temperature (K)
      * @param coverage fraction of the surface covered by the deposit (0..1), cathode only
      * @param metalShare for each deposited metal, the fraction of the surface it covers (0..1), from which
      *     it may dissolve again; null at the anode
      */
-    void prepare(double[] c, double[] km, double tempK, double coverage, double[] metalShare) {
+    void prepare(double[] c, double[] free, double[] km, double tempK, double coverage, double[] metalShare) {
         f = PhysicalConstants.FARADAY / (PhysicalConstants.GAS_CONSTANT * tempK);
         for (int k = 0; k < count; k++) {
             ReactionSlot s = slots.get(k);
@@ -134,7 +136,7 @@ final class ElectrodeKinetics {
             limitRed[k] = -1;
             for (int j = 0; j < s.oxIndex().length; j++) {
                 int idx = s.oxIndex()[j];
-                lnAo += s.oxNu()[j] * Math.log(Math.max(c[idx] * 1e-3, MIN_ACTIVITY));
+                lnAo += s.oxNu()[j] * Math.log(Math.max(free[idx] * 1e-3, MIN_ACTIVITY));
                 double il = nF * km[idx] * Math.max(c[idx], MIN_CONCENTRATION) / s.oxNu()[j];
                 if (il < ilC) {
                     ilC = il;
@@ -143,7 +145,7 @@ final class ElectrodeKinetics {
             }
             for (int j = 0; j < s.redIndex().length; j++) {
                 int idx = s.redIndex()[j];
-                lnAr += s.redNu()[j] * Math.log(Math.max(c[idx] * 1e-3, MIN_ACTIVITY));
+                lnAr += s.redNu()[j] * Math.log(Math.max(free[idx] * 1e-3, MIN_ACTIVITY));
                 double il = nF * km[idx] * Math.max(c[idx], MIN_CONCENTRATION) / s.redNu()[j];
                 if (il < ilA) {
                     ilA = il;

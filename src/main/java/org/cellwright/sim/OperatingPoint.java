@@ -46,6 +46,13 @@ final class OperatingPoint {
     static final double PHYSICS_MIN_K = 253.15;
     static final double PHYSICS_MAX_K = 393.15;
 
+    /**
+     * The diffusion layer is not thinner than it is one second after switch-on (s): at t = 0 it would be
+     * zero and mass transfer unlimited, a state no meter reads; from one second on the layer follows the
+     * planar-diffusion growth exactly, so Sand's transition times of a second and more are reproduced.
+     */
+    static final double FIRST_LAYER_S = 1.0;
+
     final ReactionNetwork net;
     final StateLayout layout;
     final ElectrodeKinetics cathode;
@@ -66,6 +73,10 @@ final class OperatingPoint {
     final double shortOhm;
     final double[] c;
     final double[] cA;
+    /** Concentrations that set activities (mol/m3): as {@link #c}, with H+ free of bisulfate. */
+    final double[] free;
+    /** The anolyte's, as {@link #free} (the same array when the cell is undivided). */
+    final double[] freeA;
     final double[] km;
     final double[] metalShare;
     final double[] cathodeI;
@@ -111,6 +122,8 @@ final class OperatingPoint {
         int n = net.species().size();
         c = new double[n];
         cA = compartments.twoCompartments() ? new double[n] : c;
+        free = new double[n];
+        freeA = compartments.twoCompartments() ? new double[n] : free;
         km = new double[n];
         metalShare = new double[net.depositMetals().size()];
         cathodeI = new double[net.cathodeSlots.size()];
@@ -139,7 +152,7 @@ final class OperatingPoint {
             unpackBlock(y, layout.anolyte0, cA);
         }
         tempK = Math.min(Math.max(y[layout.temperature], PHYSICS_MIN_K), PHYSICS_MAX_K);
-        double tEff = Math.max(t, 1e-9);
+        double tEff = Math.max(t, FIRST_LAYER_S);
         diffusionFactor = props.diffusionFactor(tempK);
         waldenFactor = diffusionFactor * PhysicalConstants.REFERENCE_TEMPERATURE_K / tempK;
         for (int j = 0; j < c.length; j++) {
@@ -162,10 +175,24 @@ final class OperatingPoint {
             metalShare[m] = moles > 0 ? coverage * Math.max(y[layout.deposit0 + m], 0) / moles : 0;
         }
         dendriteM = y[layout.dendrite];
-        cathode.prepare(c, km, tempK, coverage, metalShare);
-        anode.prepare(cA, km, tempK, 0, null);
         kappa = props.conductivity(c, tempK);
-        kappaA = compartments.twoCompartments() ? props.conductivity(cA, tempK) : kappa;
+        freeOf(c, free);
+        if (compartments.twoCompartments()) {
+            kappaA = props.conductivity(cA, tempK);
+            freeOf(cA, freeA);
+        } else {
+            kappaA = kappa;
+        }
+        cathode.prepare(c, free, km, tempK, coverage, metalShare);
+        anode.prepare(cA, freeA, km, tempK, 0, null);
+    }
+
+    /** The concentrations that set activities, after the speciation of the last conductivity call. */
+    private void freeOf(double[] total, double[] out) {
+        System.arraycopy(total, 0, out, 0, total.length);
+        if (net.hIndex >= 0) {
+            out[net.hIndex] = props.freeConcentration(net.hIndex, total[net.hIndex]);
+        }
     }
 
     /** Concentrations of one compartment's block, with H+ and OH- recovered from the net acidity. */

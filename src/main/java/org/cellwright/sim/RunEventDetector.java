@@ -27,6 +27,9 @@ final class RunEventDetector implements EventHandler {
     private final Wording wording;
     private final List<RunEvent> log;
     private boolean fired;
+    private double lastT = Double.NaN;
+    private double[] lastY;
+    private double lastG;
 
     RunEventDetector(ToDoubleBiFunction<Double, double[]> g, boolean stop, Wording wording, List<RunEvent> log) {
         this.g = g;
@@ -45,9 +48,21 @@ final class RunEventDetector implements EventHandler {
         // nothing to set up
     }
 
+    /**
+     * The switching function. The same (t, y) always gives the same value: the electrode potentials behind
+     * some switching functions are solved iteratively from the last solution, and a root search that
+     * re-evaluates the start of a step must see the sign it saw before.
+     */
     @Override
     public double g(double t, double[] y) {
-        return g.applyAsDouble(t, y);
+        if (t == lastT && java.util.Arrays.equals(y, lastY)) {
+            return lastG;
+        }
+        double value = g.applyAsDouble(t, y);
+        lastT = t;
+        lastY = y.clone();
+        lastG = value;
+        return value;
     }
 
     @Override

@@ -33,7 +33,7 @@ class CathodeCoverageTest {
         double[] c = new CellRates(sc, net).initialState();
         double[] km = new double[net.species().size()];
         Arrays.fill(km, 1e3);
-        k.prepare(c, km, 298.15, coverage, null);
+        k.prepare(c, c, km, 298.15, coverage, null);
         double e = k.potentialFor(-500);
         return k.eEq[0] - e;
     }

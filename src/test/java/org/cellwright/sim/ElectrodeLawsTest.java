@@ -1,6 +1,7 @@
 package org.cellwright.sim;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.util.LinkedHashMap;
 import java.util.List;
@@ -91,6 +92,36 @@ class ElectrodeLawsTest {
         assertEquals(10 * 36000 * 0.063546 / (2 * F), kg, 1e-9 * kg);
         assertEquals(0.11855, kg, 0.11855 * 2e-4);
         assertEquals(1.0, r.summary().currentEfficiency(), 1e-9);
+    }
+
+    @Test
+    void gasInTheGapRaisesTheOhmicDropByBruggemansLaw() {
+        // a copper cell at five times its limiting current: hydrogen at the cathode, oxygen at the anode
+        Scenario sc = TestScenarios.copperBatch(0.001, 0.01, 50e-6, 20.0, 2.0, 600, 60);
+        OperatingPoint op = prepared(sc, TestChemistry.library(10), 300);
+        op.solve(300);
+        double tempK = op.tempK;
+        double hydrogen = 0;
+        double oxygen = 0;
+        for (int k = 0; k < op.cathodeI.length; k++) {
+            String name = op.net.cathodeSlots.get(k).reaction().name();
+            if (name.equals("H+/H2") || name.equals("H2O/H2")) {
+                hydrogen += -op.cathodeI[k] * 0.01 / (2 * F);
+            }
+        }
+        for (int k = 0; k < op.anodeI.length; k++) {
+            if (op.net.anodeSlots.get(k).reaction().name().equals("O2/H2O")) {
+                oxygen += op.anodeI[k] * 0.01 / (4 * F);
+            }
+        }
+        // source: ideal gas at 1 atm, R from CODATA 2018; void fraction Qg/(Qg + u w gap), docs/model.md
+        double gasM3PerS = (hydrogen + oxygen) * 8.314462618 * tempK / 101325;
+        double eps = gasM3PerS / (gasM3PerS + 0.05 * 0.1 * 0.03);
+        assertTrue(eps > 1e-3, "the case must make gas: " + eps);
+        assertEquals(eps, op.voidFraction, 1e-12);
+        // source: Bruggeman, kappa_eff = kappa (1 - eps)^1.5 (Ann. Phys. 24 (1935) 636; Tobias 1959)
+        double r0 = 0.03 / (op.kappa * 0.01);
+        assertEquals(2.0 * r0 * (Math.pow(1 - eps, -1.5) - 1), op.currentA * (op.rGap - op.rGapNoGas), 1e-12);
     }
 
     @Test

@@ -57,6 +57,20 @@ class SupplyAndEventsTest {
     }
 
     @Test
+    void benchSupplyReturnsToItsSetCurrentWhenTheCellNeedsLessVoltage() {
+        Scenario base = TestScenarios.copperBatch(0.001, 0.01, 50e-6, 50.0, 1.0, 4 * 3600, 60);
+        List<SetPoint> schedule = List.of(new SetPoint(0, 1.0, false), new SetPoint(3 * 3600, 0.05, false));
+        Scenario sc = base.withSupply(new PowerSupply(ControlMode.CURRENT, 0, 0, 2.3, Double.POSITIVE_INFINITY, schedule));
+        RunResult r = CellSimulation.withDefaults().run(sc, TestChemistry.library(10), null);
+        List<RunEvent.Kind> kinds = r.events().stream().map(RunEvent::kind).toList();
+        int in = kinds.indexOf(RunEvent.Kind.VOLTAGE_LIMIT_ENTERED);
+        int out = kinds.indexOf(RunEvent.Kind.VOLTAGE_LIMIT_LEFT);
+        assertTrue(in >= 0 && out > in, "enters, then leaves the voltage limit: " + kinds);
+        assertEquals(3 * 3600, r.events().get(out).timeS(), 1.0, "leaves it when the set current steps down");
+        assertEquals(0.05, currentAt(r, 3.5 * 3600), 1e-12);
+    }
+
+    @Test
     void scheduleStepsAndRampsPassTheirCharge() {
         Scenario base = TestScenarios.copperBatch(0.002, 0.01, 20e-6, 200.0, 1.0, 3 * 3600, 60);
         List<SetPoint> schedule = List.of(new SetPoint(0, 2.0, false), new SetPoint(3600, 1.0, false),

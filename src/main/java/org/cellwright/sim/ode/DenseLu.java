@@ -12,19 +12,61 @@ package org.cellwright.sim.ode;
 final class DenseLu {
 
     private final int n;
+    private final double[][] input;
     private final double[][] lu;
     private final int[] pivot;
+    private final int[] order;
+    private final double[] work;
 
     /** Creates a workspace for n by n matrices. */
     DenseLu(int n) {
         this.n = n;
+        this.input = new double[n][n];
         this.lu = new double[n][n];
         this.pivot = new int[n];
+        this.order = new int[n];
+        this.work = new double[n];
     }
 
-    /** The matrix to fill before calling {@link #factor()}; it is overwritten by the factors. */
+    /** The matrix to fill before calling {@link #factor()}; the factors are kept apart from it. */
     double[][] matrix() {
-        return lu;
+        return input;
+    }
+
+    /**
+     * Orders the unknowns so that those whose column holds only its diagonal come first (components that
+     * nothing else depends on, such as running totals), then permutes the matrix symmetrically. Such a
+     * column needs no elimination, and the rest is eliminated among the coupled unknowns only: the cost
+     * falls from n^3/3 to about m^3/3 for m coupled unknowns, with the same factors up to the permutation.
+     */
+    private void permute() {
+        int next = 0;
+        for (int k = 0; k < n; k++) {
+            if (diagonalOnly(k)) {
+                order[next++] = k;
+            }
+        }
+        for (int k = 0; k < n; k++) {
+            if (!diagonalOnly(k)) {
+                order[next++] = k;
+            }
+        }
+        for (int i = 0; i < n; i++) {
+            double[] from = input[order[i]];
+            double[] to = lu[i];
+            for (int j = 0; j < n; j++) {
+                to[j] = from[order[j]];
+            }
+        }
+    }
+
+    private boolean diagonalOnly(int k) {
+        for (int i = 0; i < n; i++) {
+            if (i != k && input[i][k] != 0.0) {
+                return false;
+            }
+        }
+        return true;
     }
 
     /**
@@ -33,6 +75,7 @@ final class DenseLu {
      * @return false if a pivot is exactly zero or not finite (singular or invalid matrix), true otherwise
      */
     boolean factor() {
+        permute();
         for (int k = 0; k < n; k++) {
             int p = k;
             double largest = Math.abs(lu[k][k]);
@@ -69,7 +112,11 @@ final class DenseLu {
     }
 
     /** Solves A x = b in place (b becomes x) with the factors of the last successful {@link #factor()}. */
-    void solve(double[] b) {
+    void solve(double[] rhs) {
+        double[] b = work;
+        for (int i = 0; i < n; i++) {
+            b[i] = rhs[order[i]];
+        }
         for (int k = 0; k < n; k++) {
             int p = pivot[k];
             if (p != k) {
@@ -93,6 +140,9 @@ final class DenseLu {
                 s -= row[j] * b[j];
             }
             b[i] = s / row[i];
+        }
+        for (int i = 0; i < n; i++) {
+            rhs[order[i]] = b[i];
         }
     }
 }

@@ -316,6 +316,9 @@ public class Ros34Pw2Integrator extends AbstractIntegrator {
                 needJacobian = true;
             }
 
+            // Commons Math 3.6.1 sets resetOccurred when a handler resets but never clears it again: clear it
+            // here so that only a reset during this step forces a fresh Jacobian
+            resetOccurred = false;
             stepStart = acceptStep(interpolator, y, yDot, t);
 
             if (!isLastStep) {
