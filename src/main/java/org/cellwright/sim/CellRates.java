@@ -90,7 +90,7 @@ public final class CellRates implements FirstOrderDifferentialEquations {
             fillBlock(anolyte != null ? anolyte : sc.electrolyte().compositionMolPerM3(), layout.anolyte0);
         }
         initial[layout.temperature] = sc.electrolyte().temperatureK();
-        initial[layout.dendrite] = dendrite.initialHeightM();
+        initial[layout.dendrite] = Math.log(dendrite.initialHeightM());
     }
 
     /** Puts a composition into the concentration block at {@code offset}, H+ as the net acidity. */
@@ -247,7 +247,7 @@ public final class CellRates implements FirstOrderDifferentialEquations {
         yDot[layout.charge] = op.currentA;
         yDot[layout.energy] = op.currentA * op.cellVoltageV;
         yDot[layout.voltageTime] = op.cellVoltageV;
-        yDot[layout.dendrite] = dendrite.rate(op);
+        yDot[layout.dendrite] = dendrite.rate(op) / op.dendriteM;
         yDot[layout.shortCharge] = op.shorted ? op.currentA : 0;
     }
 

@@ -187,7 +187,7 @@ public final class CellSimulation {
         abs[layout.charge] = 1e-6;
         abs[layout.energy] = 1e-6;
         abs[layout.voltageTime] = 1e-6;
-        abs[layout.dendrite] = 1e-12;
+        abs[layout.dendrite] = 1e-6;
         abs[layout.shortCharge] = 1e-6;
         for (int i = layout.reactionCharge0; i < layout.reactionCharge0 + layout.slots; i++) {
             abs[i] = 1e-6;

@@ -174,7 +174,7 @@ final class OperatingPoint {
         for (int m = 0; m < metals.size(); m++) {
             metalShare[m] = moles > 0 ? coverage * Math.max(y[layout.deposit0 + m], 0) / moles : 0;
         }
-        dendriteM = y[layout.dendrite];
+        dendriteM = Math.exp(y[layout.dendrite]);
         kappa = props.conductivity(c, tempK);
         freeOf(c, free);
         if (compartments.twoCompartments()) {

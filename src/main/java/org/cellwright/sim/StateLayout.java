@@ -8,10 +8,12 @@ package org.cellwright.sim;
  * whole bath when the cell is undivided), the temperature (K), moles deposited per metal, moles of anode
  * dissolved, moles of H2, O2 and Cl2 given off, moles of water consumed, the gross proton turnover (mol, for
  * the water balance), charge (C), electrical energy (J), the time integral of the cell voltage (V s), the
- * dendrite tip's height above the flat deposit (m), the charge passed through a short (C), moles of each
- * metal redissolved from the deposit (corrosion), the charge passed by each electrode reaction (C, anodic
- * positive): cathode reactions first, then anode reactions; and last, in a two-compartment cell only, the
- * anolyte's concentrations in the same order as the catholyte's.
+ * natural logarithm of the dendrite tip's height above the flat deposit (ln m: the tip grows exponentially
+ * inside the diffusion layer, which the logarithm turns into a straight line for the integrator), the
+ * charge passed through a short (C), moles of each metal redissolved from the deposit (corrosion), the
+ * charge passed by each electrode reaction (C, anodic positive): cathode reactions first, then anode
+ * reactions; and last, in a two-compartment cell only, the anolyte's concentrations in the same order as the
+ * catholyte's.
  */
 final class StateLayout {
 
