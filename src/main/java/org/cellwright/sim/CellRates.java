@@ -316,7 +316,7 @@ public final class CellRates implements FirstOrderDifferentialEquations {
         double limitRatio = 0;
         if (net.targetSlot >= 0 && op.currentA > 0) {
             eff = Math.max(0, -cath[net.targetSlot] / op.currentA);
-            limitRatio = Math.max(0, -op.cathodeI[net.targetSlot] * op.cathode.invIlC[net.targetSlot]);
+            limitRatio = op.targetLimitRatio();
         }
         double amps = op.currentA;
         String form = null;

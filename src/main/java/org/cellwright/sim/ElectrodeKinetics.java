@@ -62,6 +62,7 @@ final class ElectrodeKinetics {
     private final double[] dia;
     private final double[] dic;
     private final double[] cur;
+    private final double[] cathodic;
     private final double[] dcur;
     private final double[] share;
     private final double[] dShare;
@@ -91,6 +92,7 @@ final class ElectrodeKinetics {
         dia = new double[count];
         dic = new double[count];
         cur = new double[count];
+        cathodic = new double[count];
         dcur = new double[count];
         int species = 0;
         for (ReactionSlot s : slots) {
@@ -256,6 +258,7 @@ final class ElectrodeKinetics {
             double den = 1 + a * invIlA[k] + c * invIlC[k];
             double num = a - c;
             cur[k] = num / den;
+            cathodic[k] = c / den;
             if (derivatives) {
                 double da = (dia[k] * (1 + xr) - ia[k] * dxr) / ((1 + xr) * (1 + xr));
                 double dc = (dic[k] * (1 + xo) - ic[k] * dxo) / ((1 + xo) * (1 + xo));
@@ -360,6 +363,16 @@ final class ElectrodeKinetics {
      */
     double lastCathodicKinetic(int k) {
         return ic[k];
+    }
+
+    /**
+     * The cathodic part of reaction {@code k}'s current density at the potential of the last {@link #currents}
+     * call (A/m2, positive): the reduction alone, without the reverse reaction. Over its limiting current it is
+     * how close the reduction runs to its mass-transfer limit, a ratio that stays continuous when the net
+     * current changes sign (a deposit redissolving in a bath that has lost the metal's ion).
+     */
+    double lastCathodicCurrent(int k) {
+        return cathodic[k];
     }
 
     /**

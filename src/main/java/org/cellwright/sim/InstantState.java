@@ -23,7 +23,7 @@ package org.cellwright.sim;
  * @param conductivitySPerM bath conductivity without gas (S/m)
  * @param voidFraction gas fraction in the gap
  * @param targetEfficiency the share of the current that deposits the target metal (0..1)
- * @param targetLimitRatio the target metal's partial current over its limiting current (0..1)
+ * @param targetLimitRatio the target metal's deposition (cathodic) current over its limiting current (0..1)
  * @param supplyLimited true when the supply holds its limit instead of its set value
  * @param dendriteHeightM height of the dendrite tip above the cathode's starting surface (m): the flat deposit's
  *     thickness plus the dendrite standing on it

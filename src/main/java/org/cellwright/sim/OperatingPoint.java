@@ -220,6 +220,19 @@ final class OperatingPoint {
         shorted = true;
     }
 
+    /**
+     * How close the target metal's deposition runs to its limiting current at the operating point last solved:
+     * its cathodic current over its limiting current (0 while shorted, or without a target). The cathodic part
+     * alone keeps the ratio continuous where the net current changes sign.
+     */
+    double targetLimitRatio() {
+        int k = net.targetSlot;
+        if (k < 0 || shorted) {
+            return 0;
+        }
+        return cathode.lastCathodicCurrent(k) * cathode.invIlC[k];
+    }
+
     /** End of the integration segment under way (s): at its end the set value is the left limit. */
     double segmentEndS = Double.POSITIVE_INFINITY;
 

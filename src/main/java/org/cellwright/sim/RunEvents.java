@@ -269,7 +269,7 @@ final class RunEvents {
     private double limitRatio(double t, double[] y) {
         op.unpack(t, y);
         op.solve(t);
-        return Math.max(0, -op.cathodeI[net.targetSlot] * op.cathode.invIlC[net.targetSlot]);
+        return op.targetLimitRatio();
     }
 
     private String runnerUp(InstantState s) {
