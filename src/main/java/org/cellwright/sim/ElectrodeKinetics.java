@@ -54,11 +54,18 @@ final class ElectrodeKinetics {
     final double[] invIlA;
     final double[] invIlC;
     final double[] eEq;
+    /**
+     * Of a metal's deposition at the cathode, the share of the surface its deposit covers (1 for other
+     * reactions): the metal dissolves only from there, and above its equilibrium potential nothing deposits
+     * on the rest (see {@link #evaluate}).
+     */
+    private final double[] metalWeight;
     /** Limiting dissolved species of each side of each reaction (state index), or -1. */
     private final int[] limitOx;
     private final int[] limitRed;
     private final double[] ia;
     private final double[] ic;
+    private final double[] icFull;
     private final double[] dia;
     private final double[] dic;
     private final double[] cur;
@@ -85,10 +92,12 @@ final class ElectrodeKinetics {
         invIlA = new double[count];
         invIlC = new double[count];
         eEq = new double[count];
+        metalWeight = new double[count];
         limitOx = new int[count];
         limitRed = new int[count];
         ia = new double[count];
         ic = new double[count];
+        icFull = new double[count];
         dia = new double[count];
         dic = new double[count];
         cur = new double[count];
@@ -162,11 +171,11 @@ final class ElectrodeKinetics {
             Kinetics k2 = s.depositKinetics();
             double theta = (k2 == null || k2.equals(k1)) ? 0 : coverage;
             boolean redissolves = metalShare != null && s.depositMetalIndex() >= 0;
-            double anodicShare = redissolves ? metalShare[s.depositMetalIndex()] : 1;
-            setBranch(k, k1, lnAo, lnAr, e, (1 - theta) * anodicShare, 1 - theta, true, s, redissolves);
+            metalWeight[k] = redissolves ? metalShare[s.depositMetalIndex()] : 1;
+            setBranch(k, k1, lnAo, lnAr, e, 1 - theta, 1 - theta, true, s, redissolves);
             w2[k] = theta;
             if (theta > 0) {
-                setBranch(k, k2, lnAo, lnAr, e, theta * anodicShare, theta, false, s, redissolves);
+                setBranch(k, k2, lnAo, lnAr, e, theta, theta, false, s, redissolves);
             }
         }
     }
@@ -223,6 +232,17 @@ final class ElectrodeKinetics {
                 da += aA2[k] * a2;
                 dc += -aC2[k] * c2;
             }
+            icFull[k] = cc;
+            if (metalWeight[k] < 1 && a > cc) {
+                // above the metal's equilibrium potential: only the deposit dissolves, from the share of the
+                // surface it covers; the bare rest neither dissolves nor takes metal (no deposition above the
+                // Nernst potential). At equilibrium both sides give zero, so the current stays continuous.
+                double w = metalWeight[k];
+                a *= w;
+                cc *= w;
+                da *= w;
+                dc *= w;
+            }
             ia[k] = a;
             ic[k] = cc;
             dia[k] = da;
@@ -258,7 +278,8 @@ final class ElectrodeKinetics {
             double den = 1 + a * invIlA[k] + c * invIlC[k];
             double num = a - c;
             cur[k] = num / den;
-            cathodic[k] = c / den;
+            double cf = icFull[k] / (1 + xo);
+            cathodic[k] = cf / (1 + cf * invIlC[k]);
             if (derivatives) {
                 double da = (dia[k] * (1 + xr) - ia[k] * dxr) / ((1 + xr) * (1 + xr));
                 double dc = (dic[k] * (1 + xo) - ic[k] * dxo) / ((1 + xo) * (1 + xo));
@@ -366,10 +387,11 @@ final class ElectrodeKinetics {
     }
 
     /**
-     * The cathodic part of reaction {@code k}'s current density at the potential of the last {@link #currents}
-     * call (A/m2, positive): the reduction alone, without the reverse reaction. Over its limiting current it is
-     * how close the reduction runs to its mass-transfer limit, a ratio that stays continuous when the net
-     * current changes sign (a deposit redissolving in a bath that has lost the metal's ion).
+     * The reduction of reaction {@code k} alone, with its mass-transfer loss, at the potential of the last
+     * {@link #currents} call (A/m2, positive): {@code i_c' / (1 + i_c' / iL_c)}, without the reverse
+     * reaction and over the whole electrode. Over its limiting current it is how close the reduction runs to
+     * its mass-transfer limit, a ratio that stays continuous when the net current changes sign (a deposit
+     * redissolving in a bath that has lost the metal's ion).
      */
     double lastCathodicCurrent(int k) {
         return cathodic[k];
