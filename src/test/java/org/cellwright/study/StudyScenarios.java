@@ -69,4 +69,21 @@ final class StudyScenarios {
                 PowerSupply.constantCurrent(amps), new RunSettings(durationS, 60, List.of(), "Ag"),
                 List.of(), List.of());
     }
+
+    /**
+     * An isothermal silver winning batch: stainless cathode, platinum anode (oxygen), nitrate bath with nitric
+     * acid, a set diffusion layer. Silver deposits with hardly any hydrogen at half its limiting current,
+     * so the bath follows the textbook batch law.
+     */
+    static Scenario silverWinning(double volumeM3, double areaM2, double deltaM, double agMolPerM3, double durationS) {
+        Map<String, Double> comp = new LinkedHashMap<>();
+        comp.put("Ag+", agMolPerM3);
+        comp.put("H+", 500.0);
+        comp.put("NO3-", agMolPerM3 + 500.0);
+        return new Scenario("silver winning", "", new Electrolyte(volumeM3, 298.15, comp, null),
+                new Electrode("stainless", areaM2), new Electrode("platinum", areaM2),
+                new CellSetup(0.03, Agitation.ofLayer(deltaM), 298.15, 0, 1e5 * volumeM3),
+                PowerSupply.constantCurrent(1.0), new RunSettings(durationS, 60, List.of(), "Ag"),
+                List.of(), List.of());
+    }
 }
