@@ -30,6 +30,7 @@ class SweepCommandTest {
         assertEquals(0, r.code(), r.err());
         List<String> lines = Files.readAllLines(csv);
         assertEquals(10, lines.size());
+        // source: SI prefixes and 1 dm2 = 0.01 m2: 20 mm = 0.02 m, 1 A/dm2 = 100 A/m2; 1 h = 3600 s
         assertTrue(lines.get(1).startsWith("1,20 mm,0.020000000,1 A/dm2,100.00000,ok,end,3600.0000,"), lines.get(1));
         assertTrue(r.out().startsWith("9 runs in "), r.out());
         assertTrue(r.out().contains("highest current efficiency"), r.out());

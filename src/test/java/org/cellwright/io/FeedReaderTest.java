@@ -42,8 +42,10 @@ class FeedReaderTest {
                 salt = "CuSO4.5H2O"
                 mass = "249.677 g"
                 """, "f.toml");
+        // source: 100 mL x 2 mol/L = 0.2 mol
         assertEquals(0.2, ((Feed.Add) f.steps().get(0)).mol(), 1e-12);
-        // 50 g x 0.65 / 63.012 g/mol
+        // source: 50 g x 0.65 / 63.012 g/mol (HNO3 from the IUPAC abridged weights: 1.008 + 14.007 + 3 x 15.999);
+        // 249.677 g of CuSO4.5H2O is one mole by the same weights
         assertEquals(50 * 0.65 / 63.012, ((Feed.Add) f.steps().get(1)).mol(), 1e-9);
         assertEquals(1.0, ((Feed.Add) f.steps().get(2)).mol(), 1e-9);
     }
