@@ -32,6 +32,7 @@ public final class ChargeShares {
             }
             parts.sort((a, b) -> Double.compare(Math.abs(b.getValue()), Math.abs(a.getValue())));
             StringBuilder sb = new StringBuilder();
+            List<String> said = new ArrayList<>();
             for (Map.Entry<String, Double> e : parts) {
                 double share = q > 0 ? Math.abs(e.getValue()) / q : 0;
                 if (share < 5e-4) {
@@ -39,7 +40,13 @@ public final class ChargeShares {
                 }
                 String couple = e.getKey().substring(electrode.length() + 1);
                 boolean cathodic = e.getValue() < 0;
-                sb.append(sb.length() == 0 ? "" : ", ").append(org.cellwright.sim.PlainWords.of(couple, cathodic))
+                String words = org.cellwright.sim.PlainWords.of(couple, cathodic);
+                if (said.contains(words)) {
+                    // two couples in the same words (Cu2+/Cu and Cu+/Cu): name the one that comes second
+                    words += " (" + couple + ")";
+                }
+                said.add(words);
+                sb.append(sb.length() == 0 ? "" : ", ").append(words)
                         .append(String.format(Locale.ROOT, " %.1f %%", share * 100));
             }
             out.add(String.format(Locale.ROOT, "    %-8s %s", electrode, sb.length() == 0 ? "-" : sb.toString()));

@@ -15,7 +15,8 @@ import picocli.CommandLine.Command;
         versionProvider = VersionInfo.class,
         description = "Simulates an electrolytic cell: depletion, competing electrode reactions, mass transfer,"
                 + " ohmic loss, heating and the deposit.",
-        subcommands = {CommandLine.HelpCommand.class, RunCommand.class, CheckCommand.class, LibraryCommand.class},
+        subcommands = {CommandLine.HelpCommand.class, RunCommand.class, CheckCommand.class, LibraryCommand.class,
+                FitCommand.class},
         exitCodeListHeading = "%nExit codes:%n",
         exitCodeList = {"0:success", "1:internal failure", "2:bad input (file, value or option)"})
 public final class Main implements Callable<Integer> {
