@@ -78,7 +78,7 @@ public final class FitText {
             }
         }
         out.add("");
-        out.addAll(chargeLines(r.fittedRun()));
+        out.addAll(chargeLines(r.fittedRun(), "  where the charge went in the fitted run"));
         return out;
     }
 
@@ -87,25 +87,46 @@ public final class FitText {
      * efficiency fall?".
      *
      * @param run a (fitted) run
+     * @param heading a first line, or null for none
      * @return the lines
      */
-    public static List<String> chargeLines(RunResult run) {
+    public static List<String> chargeLines(RunResult run, String heading) {
         List<String> out = new ArrayList<>();
-        out.add("  where the charge went in the fitted run");
-        out.addAll(ChargeShares.lines(run));
+        if (heading != null) {
+            out.add(heading);
+        }
+        for (RunReport.Row r : chargeRows(run)) {
+            out.add(String.format(Locale.ROOT, "    %-30s %s", r.label(), r.value()));
+        }
+        return out;
+    }
+
+    /**
+     * @param run a run
+     * @return where the charge went, as labelled rows: each electrode over the whole run, the current
+     *     efficiency at the start, the end and over the run, and the cathode's current at the start and the end
+     */
+    public static List<RunReport.Row> chargeRows(RunResult run) {
+        List<RunReport.Row> rows = new ArrayList<>();
+        for (String line : ChargeShares.lines(run)) {
+            String s = line.strip();
+            int gap = s.indexOf(' ');
+            rows.add(new RunReport.Row(s.substring(0, gap) + ", whole run", s.substring(gap).strip()));
+        }
         List<TracePoint> trace = run.trace();
         String target = run.summary().targetMetal();
         if (target != null && trace.size() > 1) {
-            out.add(String.format(Locale.ROOT, "  current efficiency for %s: %.1f %% at the start, %.1f %% at the end,"
-                    + " %.1f %% over the run", target, 100 * trace.get(0).state().targetEfficiency(),
-                    100 * trace.get(trace.size() - 1).state().targetEfficiency(),
-                    100 * run.summary().currentEfficiency()));
+            rows.add(new RunReport.Row("current efficiency for " + target, String.format(Locale.ROOT,
+                    "%.1f %% at the start, %.1f %% at the end (instantaneous); %.1f %% over the run by deposit mass",
+                    100 * trace.get(0).state().targetEfficiency(),
+                    100 * trace.get(trace.size() - 1).state().targetEfficiency(), 100 * run.summary().currentEfficiency())));
         }
         if (!trace.isEmpty()) {
-            out.add("  the cathode current at the start: " + cathodeShares(run, trace.get(0).state()));
-            out.add("  the cathode current at the end:   " + cathodeShares(run, trace.get(trace.size() - 1).state()));
+            rows.add(new RunReport.Row("cathode current at the start", cathodeShares(run, trace.get(0).state())));
+            rows.add(new RunReport.Row("cathode current at the end",
+                    cathodeShares(run, trace.get(trace.size() - 1).state())));
         }
-        return out;
+        return rows;
     }
 
     private static String cathodeShares(RunResult run, InstantState s) {

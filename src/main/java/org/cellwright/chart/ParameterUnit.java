@@ -54,10 +54,20 @@ record ParameterUnit(String symbol, double factor, double offset) {
         if (!Double.isFinite(si)) {
             return si > 0 ? "+inf" : "-inf";
         }
-        double v = si * factor + offset;
-        String num = v != 0 && (Math.abs(v) < 1e-3 || Math.abs(v) >= 1e5)
-                ? String.format(Locale.ROOT, "%.4g", v) : trim(String.format(Locale.ROOT, "%.4g", v));
+        String num = number(si * factor + offset);
         return symbol.isEmpty() ? num : num + " " + symbol;
+    }
+
+    /**
+     * @param v a number
+     * @return four significant digits without trailing zeros, scientific below 1e-3 and from 1e4
+     */
+    static String number(double v) {
+        if (v != 0 && (Math.abs(v) < 1e-3 || Math.abs(v) >= 1e4)) {
+            String[] parts = String.format(Locale.ROOT, "%.3e", v).split("e");
+            return trim(parts[0]) + "e" + parts[1];
+        }
+        return trim(String.format(Locale.ROOT, "%.4g", v));
     }
 
     private static String trim(String s) {

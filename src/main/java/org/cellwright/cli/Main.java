@@ -16,7 +16,7 @@ import picocli.CommandLine.Command;
         description = "Simulates an electrolytic cell: depletion, competing electrode reactions, mass transfer,"
                 + " ohmic loss, heating and the deposit.",
         subcommands = {CommandLine.HelpCommand.class, RunCommand.class, CheckCommand.class, LibraryCommand.class,
-                FitCommand.class},
+                FitCommand.class, ReportCommand.class},
         exitCodeListHeading = "%nExit codes:%n",
         exitCodeList = {"0:success", "1:internal failure", "2:bad input (file, value or option)"})
 public final class Main implements Callable<Integer> {

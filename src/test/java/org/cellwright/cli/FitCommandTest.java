@@ -92,6 +92,23 @@ class FitCommandTest {
     }
 
     @Test
+    void theShippedDemoLogGivesBackTheValuesItWasMadeWith() throws Exception {
+        Outcome o = execute("fit", "scenarios/copper-etchant-bleed.toml", "--log",
+                "scenarios/copper-etchant-bleed-log.csv", "--free", "cell.diffusion_layer,cell.contact_resistance",
+                "--json", "-");
+        assertEquals(0, o.code(), o.err());
+        JsonNode p = new ObjectMapper().readTree(o.out()).get("parameters");
+        // source: the log's header: made with a 45 um layer and 12 mohm of contacts (seed 2026)
+        double[][] truth = {{45e-6}, {0.012}};
+        String[] keys = {"cell.diffusion_layer", "cell.contact_resistance"};
+        for (int j = 0; j < 2; j++) {
+            JsonNode ci = p.get(keys[j]).get("ci95");
+            assertTrue(ci.get(0).asDouble() <= truth[j][0] && truth[j][0] <= ci.get(1).asDouble(),
+                    keys[j] + " " + ci);
+        }
+    }
+
+    @Test
     void badInputExitsTwoAndWritesNothing() throws Exception {
         Path json = dir.resolve("never.json");
         Outcome key = execute("fit", SCENARIO.toString(), "--log", log.toString(), "--free", "cell.diffusion_layr",
