@@ -30,24 +30,21 @@ public final class ChargeShares {
                     parts.add(e);
                 }
             }
-            parts.sort((a, b) -> Double.compare(Math.abs(b.getValue()), Math.abs(a.getValue())));
-            StringBuilder sb = new StringBuilder();
-            List<String> said = new ArrayList<>();
+            Map<String, Double> byWords = new java.util.LinkedHashMap<>();
             for (Map.Entry<String, Double> e : parts) {
-                double share = q > 0 ? Math.abs(e.getValue()) / q : 0;
-                if (share < 5e-4) {
+                String couple = e.getKey().substring(electrode.length() + 1);
+                String words = org.cellwright.sim.PlainWords.of(couple, e.getValue() < 0);
+                byWords.merge(words, q > 0 ? Math.abs(e.getValue()) / q : 0, Double::sum);
+            }
+            List<Map.Entry<String, Double>> shares = new ArrayList<>(byWords.entrySet());
+            shares.sort((a, b) -> Double.compare(b.getValue(), a.getValue()));
+            StringBuilder sb = new StringBuilder();
+            for (Map.Entry<String, Double> e : shares) {
+                if (e.getValue() < 5e-4) {
                     continue;
                 }
-                String couple = e.getKey().substring(electrode.length() + 1);
-                boolean cathodic = e.getValue() < 0;
-                String words = org.cellwright.sim.PlainWords.of(couple, cathodic);
-                if (said.contains(words)) {
-                    // two couples in the same words (Cu2+/Cu and Cu+/Cu): name the one that comes second
-                    words += " (" + couple + ")";
-                }
-                said.add(words);
-                sb.append(sb.length() == 0 ? "" : ", ").append(words)
-                        .append(String.format(Locale.ROOT, " %.1f %%", share * 100));
+                sb.append(sb.length() == 0 ? "" : ", ").append(e.getKey())
+                        .append(String.format(Locale.ROOT, " %.1f %%", e.getValue() * 100));
             }
             out.add(String.format(Locale.ROOT, "    %-8s %s", electrode, sb.length() == 0 ? "-" : sb.toString()));
         }

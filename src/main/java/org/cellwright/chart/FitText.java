@@ -1,8 +1,10 @@
 package org.cellwright.chart;
 
 import java.util.ArrayList;
+import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Locale;
+import java.util.Map;
 
 import org.cellwright.sim.InstantState;
 import org.cellwright.sim.PlainWords;
@@ -129,27 +131,24 @@ public final class FitText {
         return rows;
     }
 
+    /** The cathode's partial currents as shares of its total, one per plain-words reaction, largest first. */
     private static String cathodeShares(RunResult run, InstantState s) {
         double total = 0;
         for (double i : s.cathodeCurrentsA()) {
             total += Math.max(0, -i);
         }
-        List<double[]> parts = new ArrayList<>();
+        Map<String, Double> byWords = new LinkedHashMap<>();
         for (int k = 0; k < s.cathodeCurrentsA().length; k++) {
             double share = total > 0 ? Math.max(0, -s.cathodeCurrentsA()[k]) / total : 0;
-            if (share >= 0.005) {
-                parts.add(new double[] {k, share});
-            }
+            byWords.merge(PlainWords.of(run.cathodeReactions().get(k), true), share, Double::sum);
         }
-        parts.sort((a, b) -> Double.compare(b[1], a[1]));
+        List<Map.Entry<String, Double>> parts = new ArrayList<>(byWords.entrySet());
+        parts.sort((a, b) -> Double.compare(b.getValue(), a.getValue()));
         List<String> words = new ArrayList<>();
-        List<String> said = new ArrayList<>();
-        for (double[] p : parts) {
-            String couple = run.cathodeReactions().get((int) p[0]);
-            String w = PlainWords.of(couple, true);
-            w = said.contains(w) ? w + " (" + couple + ")" : w;
-            said.add(w);
-            words.add(String.format(Locale.ROOT, "%s %.1f %%", w, 100 * p[1]));
+        for (Map.Entry<String, Double> p : parts) {
+            if (p.getValue() >= 0.005) {
+                words.add(String.format(Locale.ROOT, "%s %.1f %%", p.getKey(), 100 * p.getValue()));
+            }
         }
         return words.isEmpty() ? "-" : String.join(", ", words);
     }

@@ -189,6 +189,14 @@ public final class BathConductivity {
         return ionicStrength(free);
     }
 
+    /**
+     * @param i index of a species in the order given at construction
+     * @return its free concentration after the last {@link #of} call (mol/m3)
+     */
+    public double freeMolPerM3(int i) {
+        return Math.max(0, free[i]) * 1000.0;
+    }
+
     private static double get(double[] a, int i) {
         return i >= 0 ? a[i] : 0;
     }

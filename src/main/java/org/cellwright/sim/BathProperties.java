@@ -10,8 +10,10 @@ import org.cellwright.chem.WaterViscosity;
 
 /**
  * Transport properties of the bath that follow composition and temperature: diffusion coefficients
- * (Stokes-Einstein with the viscosity of water) and the electrolytic conductivity (the library's model,
- * {@link BathConductivity}, evaluated at every call so that the rates stay a smooth function of the state).
+ * (Stokes-Einstein with the viscosity of water), the electrolytic conductivity (the library's model,
+ * {@link BathConductivity}, evaluated at every call so that the rates stay a smooth function of the state)
+ * and, from the same speciation, the free H+ that sets the acid's activity in sulfate baths (much of the
+ * acid is bound as HSO4-).
  * A pinned conductivity follows temperature by Walden's rule, {@code kappa mu = const} (viscosity of water).
  */
 final class BathProperties {
@@ -29,8 +31,7 @@ final class BathProperties {
         this.pinnedConductivity = pinnedConductivitySPerM;
         this.pinnedMu = WaterViscosity.of(clamp(pinnedAtK));
         this.muRef = WaterViscosity.of(PhysicalConstants.REFERENCE_TEMPERATURE_K);
-        this.conductivity = pinnedConductivitySPerM != null ? null
-                : new BathConductivity(chem, species.stream().map(Species::name).toList());
+        this.conductivity = new BathConductivity(chem, species.stream().map(Species::name).toList());
     }
 
     private static double clamp(double tempK) {
@@ -46,13 +47,24 @@ final class BathProperties {
         return (t / PhysicalConstants.REFERENCE_TEMPERATURE_K) * muRef / WaterViscosity.of(t);
     }
 
-    /** @return the conductivity of the bath without gas (S/m) */
+    /**
+     * The conductivity of the bath without gas (S/m). Also speciates the bath for
+     * {@link #freeConcentration}, also when the conductivity is pinned.
+     */
     double conductivity(double[] c, double tempK) {
         double t = clamp(tempK);
-        if (pinnedConductivity != null) {
-            return pinnedConductivity * pinnedMu / WaterViscosity.of(t);
-        }
-        return conductivity.of(c, t);
+        double model = conductivity.of(c, t);
+        return pinnedConductivity != null ? pinnedConductivity * pinnedMu / WaterViscosity.of(t) : model;
+    }
+
+    /**
+     * @param j species index
+     * @param total the species' total concentration (mol/m3)
+     * @return its free concentration after the sulfate equilibria of the last {@link #conductivity} call
+     *     (mol/m3); the total for species the equilibria do not touch
+     */
+    double freeConcentration(int j, double total) {
+        return conductivity.freeMolPerM3(j);
     }
 
     /** @return molar volume of an ideal gas at {@code tempK} and 1 atm (m3/mol) */

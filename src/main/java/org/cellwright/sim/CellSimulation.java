@@ -93,7 +93,7 @@ public final class CellSimulation {
         double duration = sc.run().durationS();
         double[] absTol = absoluteTolerances(sc, layout);
         FirstOrderIntegrator integrator = integrators.create(rates, absTol, REL_TOL,
-                Math.max(duration / 50, 1.0));
+                Math.max(duration / 20, 1.0));
         List<RunEvent> events = new ArrayList<>();
         RunEvents detectors = new RunEvents(sc, net, rates, events);
         double maxCheck = Math.min(sc.run().outputIntervalS(), duration / 200);
@@ -110,6 +110,9 @@ public final class CellSimulation {
         String stopAtStart = detectors.stopAlreadyMet(y);
         if (stopAtStart == null) {
             for (double end : breakpoints(sc)) {
+                if (t > 0) {
+                    detectors.scheduleStep(t, y, end);
+                }
                 rates.operatingPoint().segmentEndS = end;
                 t = integrator.integrate(counted, t, y, end, y);
                 if (detectors.stopped() || t < end) {

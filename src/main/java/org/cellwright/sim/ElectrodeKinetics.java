@@ -77,12 +77,14 @@ final class ElectrodeKinetics {
     /**
      * Prepares the constants of every reaction for the present composition.
      *
-     * @param c bulk concentrations (mol/m3), non-negative
+     * @param c bulk concentrations (mol/m3), non-negative, for the limiting currents
+     * @param free the concentrations that set activities (mol/m3): the free ions (H+ after the bisulfate
+     *     equilibrium)
      * @param km mass-transfer coefficient of each species (m/s)
      * @param tempK temperature (K)
      * @param coverage fraction of the surface covered by the deposit (0..1), cathode only
      */
-    void prepare(double[] c, double[] km, double tempK, double coverage) {
+    void prepare(double[] c, double[] free, double[] km, double tempK, double coverage) {
         f = PhysicalConstants.FARADAY / (PhysicalConstants.GAS_CONSTANT * tempK);
         for (int k = 0; k < count; k++) {
             ReactionSlot s = slots.get(k);
@@ -93,12 +95,12 @@ final class ElectrodeKinetics {
             double ilA = Double.POSITIVE_INFINITY;
             for (int j = 0; j < s.oxIndex().length; j++) {
                 int idx = s.oxIndex()[j];
-                lnAo += s.oxNu()[j] * Math.log(Math.max(c[idx] * 1e-3, MIN_ACTIVITY));
+                lnAo += s.oxNu()[j] * Math.log(Math.max(free[idx] * 1e-3, MIN_ACTIVITY));
                 ilC = Math.min(ilC, nF * km[idx] * Math.max(c[idx], MIN_CONCENTRATION) / s.oxNu()[j]);
             }
             for (int j = 0; j < s.redIndex().length; j++) {
                 int idx = s.redIndex()[j];
-                lnAr += s.redNu()[j] * Math.log(Math.max(c[idx] * 1e-3, MIN_ACTIVITY));
+                lnAr += s.redNu()[j] * Math.log(Math.max(free[idx] * 1e-3, MIN_ACTIVITY));
                 ilA = Math.min(ilA, nF * km[idx] * Math.max(c[idx], MIN_CONCENTRATION) / s.redNu()[j]);
             }
             double e = s.reaction().e0At(tempK) + (lnAo - lnAr) / (s.n() * f);

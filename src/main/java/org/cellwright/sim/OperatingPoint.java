@@ -42,6 +42,13 @@ final class OperatingPoint {
     static final double PHYSICS_MIN_K = 253.15;
     static final double PHYSICS_MAX_K = 393.15;
 
+    /**
+     * The diffusion layer is not thinner than it is one second after switch-on (s): at t = 0 it would be
+     * zero and mass transfer unlimited, a state no meter reads; from one second on the layer follows the
+     * planar-diffusion growth exactly, so Sand's transition times of a second and more are reproduced.
+     */
+    static final double FIRST_LAYER_S = 1.0;
+
     final ReactionNetwork net;
     final StateLayout layout;
     final ElectrodeKinetics cathode;
@@ -59,6 +66,8 @@ final class OperatingPoint {
     private final BrentSolver brent = new BrentSolver(1e-12, 1e-10);
 
     final double[] c;
+    /** Concentrations that set activities (mol/m3): as {@link #c}, with H+ free of bisulfate. */
+    final double[] free;
     final double[] km;
     final double[] cathodeI;
     final double[] anodeI;
@@ -92,6 +101,7 @@ final class OperatingPoint {
         this.anode = new ElectrodeKinetics(net.anodeSlots, 1.0);
         int n = net.species().size();
         c = new double[n];
+        free = new double[n];
         km = new double[n];
         cathodeI = new double[net.cathodeSlots.size()];
         anodeI = new double[net.anodeSlots.size()];
@@ -124,7 +134,7 @@ final class OperatingPoint {
             c[net.ohIndex] = WATER_ION_PRODUCT / hPlus;
         }
         tempK = Math.min(Math.max(y[layout.temperature], PHYSICS_MIN_K), PHYSICS_MAX_K);
-        double tEff = Math.max(t, 1e-9);
+        double tEff = Math.max(t, FIRST_LAYER_S);
         double dFactor = props.diffusionFactor(tempK);
         for (int j = 0; j < c.length; j++) {
             double d = net.species().get(j).diffusionM2PerS() * dFactor;
@@ -139,9 +149,13 @@ final class OperatingPoint {
         thickness /= cathodeAreaM2;
         coverage = 1 - Math.exp(-thickness / COVERAGE_THICKNESS_M);
         dendriteM = y[layout.dendrite];
-        cathode.prepare(c, km, tempK, coverage);
-        anode.prepare(c, km, tempK, 0);
         kappa = props.conductivity(c, tempK);
+        System.arraycopy(c, 0, free, 0, c.length);
+        if (net.hIndex >= 0) {
+            free[net.hIndex] = props.freeConcentration(net.hIndex, c[net.hIndex]);
+        }
+        cathode.prepare(c, free, km, tempK, coverage);
+        anode.prepare(c, free, km, tempK, 0);
     }
 
     /** End of the integration segment under way (s): at its end the set value is the left limit. */

@@ -130,6 +130,45 @@ final class RunEvents {
         return op.cellVoltageV;
     }
 
+    /**
+     * Records what a schedule point does at time {@code t}, where the set value may jump: the step itself,
+     * and the supply entering or leaving its limit because of it (a jump that the switching functions, which
+     * start afresh in each integration segment, cannot see as a crossing).
+     *
+     * @param t the time of the schedule point (s)
+     * @param y the state then
+     * @param nextEndS the end of the segment that starts at {@code t} (s)
+     */
+    void scheduleStep(double t, double[] y, double nextEndS) {
+        var supply = sc.supply();
+        String unit = supply.mode() == ControlMode.CURRENT ? "A" : "V";
+        double before = supply.setValueBefore(t);
+        double after = supply.setValueAt(t);
+        if (before != after) {
+            log.add(new RunEvent(t, RunEvent.Kind.SCHEDULE_STEP, String.format(Locale.ROOT,
+                    "At %s the supply's set %s steps from %.4g %s to %.4g %s.", RunClock.format(t),
+                    supply.mode() == ControlMode.CURRENT ? "current" : "voltage", before, unit, after, unit)));
+        }
+        if (supply.mode() != ControlMode.CURRENT || !Double.isFinite(supply.voltageLimitV())) {
+            return;
+        }
+        op.segmentEndS = t;
+        op.unpack(t, y);
+        boolean limitedBefore = op.voltageNeededAt(t) > supply.voltageLimitV();
+        op.segmentEndS = nextEndS;
+        op.unpack(t, y);
+        boolean limitedAfter = op.voltageNeededAt(t) > supply.voltageLimitV();
+        if (limitedBefore && !limitedAfter) {
+            log.add(new RunEvent(t, RunEvent.Kind.VOLTAGE_LIMIT_LEFT, String.format(Locale.ROOT,
+                    "At %s the cell again needs less than %.2f V: the supply is back to its set current.",
+                    RunClock.format(t), supply.voltageLimitV())));
+        } else if (!limitedBefore && limitedAfter) {
+            log.add(new RunEvent(t, RunEvent.Kind.VOLTAGE_LIMIT_ENTERED, String.format(Locale.ROOT,
+                    "At %s the new set current would need more than the supply's %.2f V limit: the supply holds"
+                            + " %.2f V instead.", RunClock.format(t), supply.voltageLimitV(), supply.voltageLimitV())));
+        }
+    }
+
     private void addSupplyLimit() {
         var supply = sc.supply();
         if (supply.mode() == ControlMode.CURRENT && Double.isFinite(supply.voltageLimitV())) {
