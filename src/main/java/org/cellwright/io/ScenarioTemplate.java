@@ -25,8 +25,8 @@ import org.tomlj.TomlParseResult;
  * scenario is read again, so a fitted value passes the same checks as one written in the file and any numeric
  * key of the scenario can be free.
  *
- * <p>Reading the scenario again costs about a tenth of an engine run (measured: 3 to 10 ms against 10 to
- * 85 ms for the shipped scenarios). Free keys are located as {@code (from --free):N:1}, N being the key's
+ * <p>Reading the scenario again costs a fraction of an engine run (measured: 3 to 7 ms against 6 to 40 ms
+ * for the shipped scenarios). Free keys are located as {@code (from --free):N:1}, N being the key's
  * place in the list.
  */
 public final class ScenarioTemplate implements ScenarioFamily {
