@@ -10,7 +10,6 @@ import java.awt.GridBagLayout;
 import java.awt.Insets;
 import java.awt.RenderingHints;
 import java.awt.geom.RoundRectangle2D;
-import java.util.List;
 
 import javax.swing.BorderFactory;
 import javax.swing.JLabel;
@@ -29,7 +28,7 @@ final class CautionPanel extends JPanel {
     static final String DEFER = "Cellwright is a planning aid: follow local codes, the safety data sheets of your"
             + " chemicals and licensed practice.";
 
-    private transient CautionList list = new CautionList(List.of(), List.of());
+    private transient CautionList list;
 
     CautionPanel() {
         super(new GridBagLayout());
@@ -38,9 +37,15 @@ final class CautionPanel extends JPanel {
         render();
     }
 
+    /** Says that cautions come with a run. */
+    void clear() {
+        list = null;
+        render();
+    }
+
     /** @param cautions the cautions and notes to show */
     void show(CautionList cautions) {
-        if (cautions.equals(list) && getComponentCount() > 0) {
+        if (cautions.equals(list)) {
             return;
         }
         this.list = cautions;
@@ -55,6 +60,12 @@ final class CautionPanel extends JPanel {
     private void render() {
         removeAll();
         int row = 0;
+        if (list == null) {
+            add(text("The safety cautions that the scenario triggers appear here once it has run.", Font.PLAIN), at(0, 0));
+            revalidate();
+            repaint();
+            return;
+        }
         JLabel head = new JLabel(list.safety().isEmpty() ? "No safety cautions for this run" : "Safety cautions") {
             private static final long serialVersionUID = 1L;
 

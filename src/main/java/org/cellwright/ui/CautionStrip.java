@@ -11,7 +11,6 @@ import java.awt.RenderingHints;
 import java.awt.event.MouseAdapter;
 import java.awt.event.MouseEvent;
 import java.awt.geom.RoundRectangle2D;
-import java.util.List;
 import java.util.Locale;
 
 import javax.swing.BorderFactory;
@@ -48,7 +47,12 @@ final class CautionStrip extends JPanel {
         };
         addMouseListener(click);
         text.addMouseListener(click);
-        show(new CautionList(List.of(), List.of()));
+        clear();
+    }
+
+    /** Says that cautions come with a run. */
+    void clear() {
+        text.show("The safety cautions appear here once the scenario has run.");
     }
 
     /** @param list the cautions to name */

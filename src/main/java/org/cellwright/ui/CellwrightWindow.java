@@ -1,15 +1,12 @@
 package org.cellwright.ui;
 
 import java.awt.BorderLayout;
-import java.awt.Color;
 import java.awt.Dimension;
 import java.awt.Font;
 import java.awt.Graphics2D;
 import java.awt.event.WindowAdapter;
 import java.awt.event.WindowEvent;
 import java.awt.image.BufferedImage;
-import java.io.IOException;
-import java.nio.file.Path;
 import java.util.List;
 import java.util.concurrent.ExecutionException;
 
@@ -20,8 +17,6 @@ import javax.swing.JFrame;
 import javax.swing.JLabel;
 import javax.swing.JPanel;
 import javax.swing.JProgressBar;
-import javax.swing.JScrollPane;
-import javax.swing.JSplitPane;
 import javax.swing.JTabbedPane;
 import javax.swing.SwingConstants;
 import javax.swing.SwingUtilities;
@@ -31,7 +26,6 @@ import javax.swing.WindowConstants;
 import org.cellwright.chem.ChemLibrary;
 import org.cellwright.io.LibraryReader;
 import org.cellwright.io.ScenarioException;
-import org.cellwright.sim.RunResult;
 
 /**
  * Cellwright's desktop window: the scenario form on the left, the run's six charts with the playback bar and
@@ -45,6 +39,8 @@ public final class CellwrightWindow implements WindowActions.Commands {
     private final WindowDialogs dialogs = new WindowDialogs(frame);
     private final WindowActions actions = new WindowActions(this);
     private final StatusBar status = new StatusBar();
+    private final FileCommands files = new FileCommands(dialogs, status, () -> this.session, () -> this.director,
+            () -> this.dark);
     private final boolean exitOnClose;
     private RunDirector director;
     private ScenarioSession session;
@@ -166,70 +162,8 @@ public final class CellwrightWindow implements WindowActions.Commands {
         session = new ScenarioSession(lib, form, knobs, director, status, this::titleChanged);
         comparisonPanel = new ComparisonPanel(comparison, actions.pin, e -> director.setReference(e));
 
-        JScrollPane formScroll = new JScrollPane(form);
-        formScroll.setBorder(BorderFactory.createEmptyBorder());
-        formScroll.getViewport().setOpaque(false);
-        formScroll.setOpaque(false);
-        form.setOpaque(false);
-        Sidebar left = new Sidebar();
-        left.add(heading("Scenario"), BorderLayout.NORTH);
-        left.add(formScroll, BorderLayout.CENTER);
-        left.setPreferredSize(new Dimension(350, 100));
-        left.setMinimumSize(new Dimension(300, 100));
-
-        JPanel middle = new JPanel(new BorderLayout());
-        middle.add(bar, BorderLayout.NORTH);
-        grid.setBorder(BorderFactory.createEmptyBorder(2, 8, 6, 8));
-        grid.setPreferredSize(new Dimension(600, 500));
-        middle.add(grid, BorderLayout.CENTER);
-        JPanel log = new JPanel(new BorderLayout());
-        log.add(heading("Event log: why the curves bend"), BorderLayout.NORTH);
-        log.add(events, BorderLayout.CENTER);
-        log.setPreferredSize(new Dimension(100, 150));
-
-        JSplitPane chartsAndLog = new JSplitPane(JSplitPane.VERTICAL_SPLIT, middle, log);
-        chartsAndLog.setResizeWeight(1);
-        chartsAndLog.setBorder(null);
-
-        Sidebar right = new Sidebar();
-        JPanel knobBox = new JPanel(new BorderLayout());
-        knobBox.setOpaque(false);
-        knobBox.add(heading("What if"), BorderLayout.NORTH);
-        knobs.setOpaque(false);
-        knobBox.add(knobs, BorderLayout.CENTER);
-        JPanel stripBox = new JPanel(new BorderLayout());
-        stripBox.setOpaque(false);
-        stripBox.setBorder(BorderFactory.createEmptyBorder(2, 8, 8, 8));
-        stripBox.add(strip, BorderLayout.CENTER);
-        JScrollPane summaryScroll = new JScrollPane(summary);
-        summaryScroll.setBorder(BorderFactory.createEmptyBorder());
-        JPanel cautionBox = new JPanel(new BorderLayout());
-        cautionBox.setBorder(BorderFactory.createEmptyBorder(8, 8, 8, 8));
-        cautionBox.add(cautions, BorderLayout.NORTH);
-        JScrollPane cautionScroll = new JScrollPane(cautionBox);
-        cautionScroll.setBorder(BorderFactory.createEmptyBorder());
-        cautionScroll.getVerticalScrollBar().setUnitIncrement(16);
-        tabs.addTab("Summary", summaryScroll);
-        tabs.addTab("Cautions", new GlyphIcon(GlyphIcon.Shape.CAUTION, 13, "Cellwright.caution.mark"), cautionScroll);
-        tabs.addTab("Compare", comparisonPanel);
-        tabs.setToolTipTextAt(0, "The run's key figures and where the charge went");
-        tabs.setToolTipTextAt(1, "The safety cautions the run triggers, and notes on the chemistry and data");
-        tabs.setToolTipTextAt(2, "Pinned runs side by side; the selected one is drawn dashed");
-        JPanel lower = new JPanel(new BorderLayout());
-        lower.setOpaque(false);
-        lower.add(stripBox, BorderLayout.NORTH);
-        lower.add(tabs, BorderLayout.CENTER);
-        right.add(knobBox, BorderLayout.NORTH);
-        right.add(lower, BorderLayout.CENTER);
-        right.setPreferredSize(new Dimension(380, 100));
-        right.setMinimumSize(new Dimension(330, 100));
-
-        JSplitPane centerRight = new JSplitPane(JSplitPane.HORIZONTAL_SPLIT, chartsAndLog, right);
-        centerRight.setResizeWeight(1);
-        centerRight.setBorder(null);
-        JSplitPane all = new JSplitPane(JSplitPane.HORIZONTAL_SPLIT, left, centerRight);
-        all.setResizeWeight(0);
-        all.setBorder(null);
+        JComponent all = WindowLayout.arrange(form, knobs, bar, grid, events, strip, tabs, summary, cautions,
+                comparisonPanel);
 
         frame.getContentPane().removeAll();
         frame.getContentPane().add(all, BorderLayout.CENTER);
@@ -244,34 +178,6 @@ public final class CellwrightWindow implements WindowActions.Commands {
         }
         refreshActions();
         ready = true;
-    }
-
-    private static JComponent heading(String text) {
-        JLabel l = new JLabel(text.toUpperCase(java.util.Locale.ROOT)) {
-            private static final long serialVersionUID = 1L;
-
-            @Override
-            public Color getForeground() {
-                return UiTheme.color("section.foreground");
-            }
-        };
-        l.setFont(UiTheme.font(-1, Font.BOLD));
-        l.setBorder(BorderFactory.createEmptyBorder(8, 10, 4, 10));
-        return l;
-    }
-
-    /** A side column in the look's sidebar colour. */
-    private static final class Sidebar extends JPanel {
-        private static final long serialVersionUID = 1L;
-
-        Sidebar() {
-            super(new BorderLayout());
-        }
-
-        @Override
-        public Color getBackground() {
-            return UiTheme.color("sidebar.background");
-        }
     }
 
     private void refreshActions() {
@@ -338,121 +244,34 @@ public final class CellwrightWindow implements WindowActions.Commands {
         frame.dispose();
     }
 
-    private boolean discardOrSave() {
-        if (session == null || !session.changed()) {
-            return true;
-        }
-        int answer = dialogs.confirmDiscard(session.name());
-        if (answer == javax.swing.JOptionPane.YES_OPTION) {
-            save();
-            return !session.changed();
-        }
-        return answer == javax.swing.JOptionPane.NO_OPTION;
-    }
-
     @Override
     public void newFromTemplate() {
-        if (session != null && discardOrSave()) {
-            ScenarioTemplate t = dialogs.chooseTemplate();
-            if (t != null) {
-                session.newFrom(t);
-            }
-        }
+        files.newFromTemplate();
     }
 
     @Override
     public void open() {
-        if (session == null || !discardOrSave()) {
-            return;
-        }
-        Path p = dialogs.chooseScenarioToOpen();
-        if (p == null) {
-            return;
-        }
-        try {
-            session.openFile(p);
-        } catch (ScenarioException e) {
-            dialogs.showProblems(p.getFileName().toString(), e.problems());
-        } catch (IOException e) {
-            dialogs.showError("Cannot read " + p + ": " + e.getMessage());
-        }
+        files.open();
     }
 
     @Override
     public void save() {
-        if (session == null) {
-            return;
-        }
-        if (session.file() == null) {
-            saveAs();
-            return;
-        }
-        saveTo(session.file());
+        files.save();
     }
 
     @Override
     public void saveAs() {
-        if (session != null) {
-            String base = session.file() != null ? session.file().getFileName().toString() : "scenario.toml";
-            Path p = dialogs.chooseScenarioToSave(base);
-            if (p != null) {
-                saveTo(p);
-            }
-        }
-    }
-
-    private void saveTo(Path p) {
-        try {
-            String why = session.saveTo(p);
-            if (why != null) {
-                dialogs.showError(why);
-            }
-        } catch (IOException e) {
-            dialogs.showError("Cannot write " + p + ": " + e.getMessage());
-        }
+        files.saveAs();
     }
 
     @Override
     public void export(RunExport.Kind kind) {
-        RunResult run = director == null ? null : director.result();
-        if (run == null) {
-            return;
-        }
-        String base = session.name().replaceAll("\\.toml$", "").replaceAll("[^A-Za-z0-9._-]+", "-");
-        Path p = dialogs.chooseExport(base, kind);
-        if (p == null) {
-            return;
-        }
-        RunComparison.Entry ref = director.reference();
-        String label = session.name();
-        boolean darkSheet = dark;
-        status.busy(true);
-        status.say("Exporting " + p.getFileName() + "...");
-        new SwingWorker<Void, Void>() {
-            @Override
-            protected Void doInBackground() throws IOException {
-                RunExport.write(run, label, ref == null ? null : ref.run(), ref == null ? null : ref.name(), darkSheet, p);
-                return null;
-            }
-
-            @Override
-            protected void done() {
-                status.busy(false);
-                try {
-                    get();
-                    status.say("Exported " + p + ".");
-                } catch (ExecutionException e) {
-                    status.fail("Cannot export " + p.getFileName() + ": " + e.getCause().getMessage());
-                } catch (InterruptedException e) {
-                    Thread.currentThread().interrupt();
-                }
-            }
-        }.execute();
+        files.export(kind);
     }
 
     @Override
     public void quit() {
-        if (!discardOrSave()) {
+        if (!files.discardOrSave()) {
             return;
         }
         frame.dispose();

@@ -23,6 +23,7 @@ final class ComparisonPanel extends JPanel {
 
     private final RunComparison model;
     private final JTable table;
+    private final WrapText legend = new WrapText("", "muted.foreground", -1, java.awt.Font.PLAIN, 330);
 
     /**
      * @param model the runs
@@ -32,10 +33,24 @@ final class ComparisonPanel extends JPanel {
     ComparisonPanel(RunComparison model, Action pinAction, Consumer<RunComparison.Entry> chosen) {
         super(new BorderLayout());
         this.model = model;
-        table = new JTable(model);
+        table = new JTable(model) {
+            private static final long serialVersionUID = 1L;
+
+            @Override
+            public String getToolTipText(java.awt.event.MouseEvent e) {
+                int row = rowAtPoint(e.getPoint());
+                return row < 0 ? null : model.describe(row);
+            }
+        };
+        table.getTableHeader().setToolTipText("Deposit of the target metal, current efficiency, specific energy,"
+                + " mean cell voltage and time to short of each run");
         table.setSelectionMode(ListSelectionModel.SINGLE_SELECTION);
         table.setFillsViewportHeight(true);
-        table.getColumnModel().getColumn(0).setPreferredWidth(170);
+        int[] widths = {44, 78, 52, 56, 56, 60};
+        for (int i = 0; i < widths.length; i++) {
+            table.getColumnModel().getColumn(i).setPreferredWidth(widths[i]);
+        }
+        model.addTableModelListener(e -> legend.show(legendText()));
         table.setToolTipText("Select a pinned run to draw it dashed under the live curves.");
         table.getSelectionModel().addListSelectionListener(e -> {
             if (!e.getValueIsAdjusting()) {
@@ -65,7 +80,24 @@ final class ComparisonPanel extends JPanel {
         top.add(buttons, BorderLayout.NORTH);
         top.add(hint, BorderLayout.CENTER);
         add(top, BorderLayout.NORTH);
-        add(new JScrollPane(table), BorderLayout.CENTER);
+        JPanel middle = new JPanel(new BorderLayout());
+        JScrollPane scroll = new JScrollPane(table);
+        scroll.setPreferredSize(new java.awt.Dimension(300, 130));
+        middle.add(scroll, BorderLayout.NORTH);
+        legend.setBorder(BorderFactory.createEmptyBorder(6, 8, 6, 8));
+        middle.add(legend, BorderLayout.CENTER);
+        add(middle, BorderLayout.CENTER);
+    }
+
+    private String legendText() {
+        StringBuilder sb = new StringBuilder();
+        for (int row = 0; row < model.getRowCount(); row++) {
+            String d = model.describe(row);
+            if (!d.isEmpty()) {
+                sb.append(sb.length() == 0 ? "" : "\n").append(d);
+            }
+        }
+        return sb.toString();
     }
 
     /** Pins the run shown now and selects it, so that it is drawn as the reference. */

@@ -1,24 +1,20 @@
 package org.cellwright.ui;
 
-import java.awt.Color;
-
-import javax.swing.JLabel;
+import java.awt.Font;
 
 /**
  * The line under a form field that says what is wrong with it, in the look's error colour (or warning
- * colour), wrapped to the field's width; empty and taking no room when all is well.
+ * colour), wrapped to the width the form gives it; hidden, taking no room, when all is well.
  */
-final class FieldMessage extends JLabel {
+final class FieldMessage extends WrapText {
 
     private static final long serialVersionUID = 1L;
 
-    /** Width the message wraps at (px, before scaling). */
-    private final int wrapWidth;
     private boolean warning;
 
-    /** @param wrapWidth width the message wraps at (px) */
+    /** @param wrapWidth width the message wraps at before the form is laid out (px) */
     FieldMessage(int wrapWidth) {
-        this.wrapWidth = wrapWidth;
+        super("", "error.foreground", -1, Font.PLAIN, wrapWidth);
         setVisible(false);
     }
 
@@ -29,12 +25,13 @@ final class FieldMessage extends JLabel {
     void show(String text, boolean asWarning) {
         this.warning = asWarning;
         if (text == null || text.isBlank()) {
-            setText("");
             setVisible(false);
+            show("");
         } else {
-            setText("<html><div style='width:" + wrapWidth + "px'>" + escape(text) + "</div></html>");
+            show(text);
             setVisible(true);
         }
+        repaint();
     }
 
     /** @return true when a message shows */
@@ -43,16 +40,11 @@ final class FieldMessage extends JLabel {
     }
 
     @Override
-    public Color getForeground() {
-        return UiTheme.color(warning ? "warning.foreground" : "error.foreground");
+    protected String colourKey() {
+        return warning ? "warning.foreground" : "error.foreground";
     }
 
-    @Override
-    public void updateUI() {
-        super.updateUI();
-        setFont(UiTheme.font(-1, java.awt.Font.PLAIN));
-    }
-
+    /** @return text with the characters HTML gives a meaning to escaped */
     static String escape(String s) {
         return s.replace("&", "&amp;").replace("<", "&lt;").replace(">", "&gt;");
     }

@@ -69,7 +69,7 @@ final class PlaybackBar extends JPanel {
         });
         clock.setFont(UiTheme.font(0, Font.PLAIN));
         clock.setToolTipText("Play head / end of the run (simulated time)");
-        clock.setPreferredSize(new Dimension(150, clock.getPreferredSize().height));
+        clock.setPreferredSize(new Dimension(190, clock.getPreferredSize().height));
         clock.setHorizontalAlignment(JLabel.RIGHT);
         GridBagConstraints c = new GridBagConstraints();
         c.insets = new Insets(0, 0, 0, 4);

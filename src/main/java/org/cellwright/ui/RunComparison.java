@@ -21,7 +21,12 @@ final class RunComparison extends AbstractTableModel {
     /** Most runs kept: enough to compare a few what-ifs, few enough to read side by side. */
     static final int MAX_PINNED = 8;
 
-    private static final String[] COLUMNS = {"Run", "Deposit (g)", "Efficiency (%)", "kWh/kg", "Mean V", "Short"};
+    private static final String[] COLUMNS = {"Run", "Deposit", "Eff. %", "kWh/kg", "Mean V", "Short"};
+    /** What each column holds, for the header tooltips. */
+    static final String[] COLUMN_TIPS = {"The run shown now, and the pinned runs by number",
+        "Deposit of the target metal (g)", "Current efficiency for the target metal, whole run (%)",
+        "Specific energy per kg of target metal (kWh/kg)", "Time-averaged cell voltage (V)",
+        "Time of a short circuit, or its forecast (~)"};
 
     /**
      * A run and its label.
@@ -96,6 +101,23 @@ final class RunComparison extends AbstractTableModel {
         return List.copyOf(pinned);
     }
 
+    private static String row(Entry e) {
+        String l = e.label();
+        return l.startsWith("#") ? l.substring(1, l.indexOf(' ') < 0 ? l.length() : l.indexOf(' ')) : l;
+    }
+
+    /**
+     * @param row a table row
+     * @return the run's full label, for the row's tooltip and the list under the table
+     */
+    String describe(int row) {
+        Entry e = entry(row);
+        if (e == null) {
+            return "";
+        }
+        return row == 0 ? "now: " + e.label() : e.label();
+    }
+
     @Override
     public int getRowCount() {
         return 1 + pinned.size();
@@ -119,9 +141,9 @@ final class RunComparison extends AbstractTableModel {
         }
         RunSummary s = e.run().summary();
         return switch (column) {
-            case 0 -> row == 0 ? "now: " + e.label() : e.label();
-            case 1 -> s.targetMetal() == null ? String.format(Locale.ROOT, "%.4g", s.depositTotalKg() * 1000)
-                    : String.format(Locale.ROOT, "%.4g %s", s.depositKg().getOrDefault(s.targetMetal(), 0.0) * 1000,
+            case 0 -> row == 0 ? "now" : "#" + row(e);
+            case 1 -> s.targetMetal() == null ? String.format(Locale.ROOT, "%.3g g", s.depositTotalKg() * 1000)
+                    : String.format(Locale.ROOT, "%.3g g %s", s.depositKg().getOrDefault(s.targetMetal(), 0.0) * 1000,
                     s.targetMetal());
             case 2 -> s.targetMetal() == null ? "-" : String.format(Locale.ROOT, "%.1f", 100 * s.currentEfficiency());
             case 3 -> Double.isFinite(s.specificEnergyJPerKg())

@@ -112,8 +112,8 @@ final class RunDirector {
         playback = null;
         panels.events().show(List.of());
         panels.summary().clear();
-        panels.cautions().show(CautionList.of(List.of()));
-        panels.strip().show(CautionList.of(List.of()));
+        panels.cautions().clear();
+        panels.strip().clear();
         panels.playback().clear();
         panels.comparison().setCurrent(null, null);
         setSpeed(PlaybackSpeed.forDuration(span));
@@ -159,7 +159,7 @@ final class RunDirector {
         panels.strip().show(cautions);
         playback = new Playback(run.trace(), run.events(), speed.simSecondsPerSecond());
         if (request.purpose() == Purpose.PLAY) {
-            model.clear();
+            SteadyAxes.freeze(charts, run.trace());
             charts.setEvents(List.of());
             panels.events().show(List.of());
             apply(playback.play());
@@ -169,6 +169,7 @@ final class RunDirector {
         } else {
             ticker.stop();
             playback.jumpToEnd();
+            SteadyAxes.release(charts);
             model.replaceWith(run.trace());
             charts.setEvents(run.events());
             panels.events().show(run.events());
@@ -313,6 +314,7 @@ final class RunDirector {
         if (charts == null) {
             return;
         }
+        SteadyAxes.release(charts);
         charts.setReference(e == null ? null : e.run(), e == null ? null : e.name());
         if (e == null && result != null) {
             charts.setTimeSpan(RunChartModel.plannedSpanOf(result));

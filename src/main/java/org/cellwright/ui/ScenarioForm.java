@@ -1,10 +1,7 @@
 package org.cellwright.ui;
 
 import java.awt.Dimension;
-import java.awt.Font;
-import java.awt.GridBagConstraints;
 import java.awt.GridBagLayout;
-import java.awt.Insets;
 import java.awt.Rectangle;
 import java.util.HashMap;
 import java.util.List;
@@ -17,7 +14,6 @@ import javax.swing.JComponent;
 import javax.swing.JLabel;
 import javax.swing.JPanel;
 import javax.swing.JScrollPane;
-import javax.swing.JSeparator;
 import javax.swing.JTextArea;
 import javax.swing.JTextField;
 import javax.swing.Scrollable;
@@ -40,7 +36,7 @@ final class ScenarioForm extends JPanel implements Scrollable {
     private static final String OUTLINE = "JComponent.outline";
     /** The agitation choice that sets the diffusion layer directly. */
     static final String SET_LAYER = "thickness, set below";
-    private static final int MESSAGE_WIDTH = 250;
+    private static final int MESSAGE_WIDTH = 210;
 
     private final transient ChemLibrary lib;
     private final transient Runnable edited;
@@ -49,11 +45,11 @@ final class ScenarioForm extends JPanel implements Scrollable {
     private final JComboBox<SupplyKind> supplyKind = new JComboBox<>(SupplyKind.values());
     private final JComboBox<String> agitation = new JComboBox<>();
     private final CompositionEditor composition;
-    private final FieldMessage general = new FieldMessage(MESSAGE_WIDTH + 60);
-    private final FieldMessage warnings = new FieldMessage(MESSAGE_WIDTH + 60);
+    private final FieldMessage general = new FieldMessage(MESSAGE_WIDTH + 100);
+    private final FieldMessage warnings = new FieldMessage(MESSAGE_WIDTH + 100);
     private transient ScenarioDraft draft = ScenarioDraft.empty();
+    private final FormGrid grid = new FormGrid(this);
     private boolean quiet;
-    private int row;
 
     /**
      * @param lib the chemistry library (names, molar masses, materials)
@@ -73,9 +69,9 @@ final class ScenarioForm extends JPanel implements Scrollable {
     }
 
     private void build() {
-        span(general);
-        span(warnings);
-        section("Description");
+        grid.span(general);
+        grid.span(warnings);
+        grid.section("Description");
         text("title");
         JTextArea notes = new JTextArea(3, 20);
         notes.setLineWrap(true);
@@ -83,23 +79,24 @@ final class ScenarioForm extends JPanel implements Scrollable {
         notes.setToolTipText("Free text for whoever runs the scenario: what to look at.");
         JScrollPane notesScroll = new JScrollPane(notes);
         notesScroll.setPreferredSize(new Dimension(100, 64));
+        notesScroll.setMinimumSize(new Dimension(60, 64));
         register(FormFields.NOTES, notes);
         labelled("Notes", notesScroll, FormFields.NOTES);
-        section("Bath");
+        grid.section("Bath");
         text("electrolyte.volume");
         text("electrolyte.temperature");
         text("electrolyte.conductivity");
         JLabel comp = new JLabel("Composition");
         comp.setToolTipText("Start concentration of each dissolved species.");
-        span(comp);
-        span(composition);
-        section("Electrodes");
+        grid.span(comp);
+        grid.span(composition);
+        grid.section("Electrodes");
         String materials = String.join(", ", lib.materials().stream().map(ElectrodeMaterial::name).toList());
         text("cathode.material").setToolTipText(tip("cathode.material") + "<br>Known: " + materials + "</html>");
         text("cathode.area");
         text("anode.material").setToolTipText(tip("anode.material") + "<br>Known: " + materials + "</html>");
         text("anode.area");
-        section("Cell");
+        grid.section("Cell");
         text("cell.gap");
         agitation.setToolTipText(tip(FormFields.AGITATION) + "</html>");
         agitation.addActionListener(e -> agitationChosen());
@@ -108,7 +105,7 @@ final class ScenarioForm extends JPanel implements Scrollable {
         text("cell.ambient");
         text("cell.contact_resistance");
         text("cell.heat_loss");
-        section("Supply");
+        grid.section("Supply");
         supplyKind.setToolTipText("What the supply holds: a current, a current density (times the cathode area) or a"
                 + " voltage.");
         supplyKind.addActionListener(e -> supplyKindChosen());
@@ -116,15 +113,12 @@ final class ScenarioForm extends JPanel implements Scrollable {
         text(FormFields.SUPPLY_VALUE);
         text("supply.voltage_limit");
         text("supply.current_limit");
-        section("Run");
+        grid.section("Run");
         text("run.duration");
         text("run.output_interval");
         text(FormFields.STOPS);
         text("run.target");
-        GridBagConstraints c = new GridBagConstraints();
-        c.gridy = row++;
-        c.weighty = 1;
-        add(new JLabel(), c);
+        grid.end();
     }
 
     /** @return the draft the form edits */
@@ -334,61 +328,12 @@ final class ScenarioForm extends JPanel implements Scrollable {
     }
 
     private void labelled(String caption, JComponent comp, String key) {
-        JLabel l = new JLabel(caption);
-        l.setLabelFor(comp);
-        l.setToolTipText(comp.getToolTipText());
-        GridBagConstraints c = new GridBagConstraints();
-        c.gridy = row;
-        c.gridx = 0;
-        c.anchor = GridBagConstraints.WEST;
-        c.insets = new Insets(2, 0, 2, 8);
-        add(l, c);
-        c.gridx = 1;
-        c.weightx = 1;
-        c.fill = GridBagConstraints.HORIZONTAL;
-        c.insets = new Insets(2, 0, 2, 0);
-        add(comp, c);
-        row++;
+        grid.labelled(caption, comp);
         if (key != null) {
-            FieldMessage m = new FieldMessage(MESSAGE_WIDTH - 60);
+            FieldMessage m = new FieldMessage(MESSAGE_WIDTH);
             messages.put(key, m);
-            c.gridy = row++;
-            c.insets = new Insets(0, 2, 3, 0);
-            add(m, c);
+            grid.message(m);
         }
-    }
-
-    private void span(JComponent comp) {
-        GridBagConstraints c = new GridBagConstraints();
-        c.gridy = row++;
-        c.gridx = 0;
-        c.gridwidth = 2;
-        c.weightx = 1;
-        c.fill = GridBagConstraints.HORIZONTAL;
-        c.insets = new Insets(2, 0, 2, 0);
-        add(comp, c);
-    }
-
-    private void section(String title) {
-        JLabel l = new JLabel(title.toUpperCase(java.util.Locale.ROOT)) {
-            private static final long serialVersionUID = 1L;
-
-            @Override
-            public java.awt.Color getForeground() {
-                return UiTheme.color("section.foreground");
-            }
-        };
-        l.setFont(UiTheme.font(-1, Font.BOLD));
-        GridBagConstraints c = new GridBagConstraints();
-        c.gridy = row++;
-        c.gridx = 0;
-        c.gridwidth = 2;
-        c.fill = GridBagConstraints.HORIZONTAL;
-        c.insets = new Insets(row > 3 ? 12 : 4, 0, 1, 0);
-        add(l, c);
-        c.gridy = row++;
-        c.insets = new Insets(0, 0, 4, 0);
-        add(new JSeparator(), c);
     }
 
     @Override

@@ -98,7 +98,9 @@ final class SummaryFigures {
         for (String line : ChargeShares.lines(r)) {
             String t = line.strip();
             int space = t.indexOf(' ');
-            out.add(space > 0 ? t.substring(0, space) + ": " + t.substring(space).strip() : t);
+            String words = space > 0 ? t.substring(0, space) + ": " + t.substring(space).strip() : t;
+            // a number stays on the line of its unit
+            out.add(words.replace(" %", "\u00a0%"));
         }
         return out;
     }

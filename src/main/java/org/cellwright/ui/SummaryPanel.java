@@ -92,7 +92,7 @@ final class SummaryPanel extends JPanel implements Scrollable {
     void show(String title, RunResult r) {
         empty.setVisible(false);
         head.setVisible(true);
-        head.show(title);
+        head.show("Whole run: " + title);
         List<SummaryFigures.Figure> figures = SummaryFigures.of(r);
         for (int i = 0; i < FIGURE_ROWS; i++) {
             boolean on = i < figures.size();

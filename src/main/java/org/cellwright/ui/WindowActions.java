@@ -201,8 +201,9 @@ final class WindowActions {
         export.setEnabled(hasRun);
         exportKinds.forEach(a -> a.setEnabled(hasRun));
         boolean playing = state == Playback.State.PLAYING;
-        pause.putValue(Action.NAME, playing ? "Pause" : state == Playback.State.FINISHED ? "Replay" : "Resume");
-        pause.putValue(Action.SMALL_ICON, new GlyphIcon(playing ? GlyphIcon.Shape.PAUSE
+        pause.putValue(Action.NAME, playing || state == null ? "Pause"
+                : state == Playback.State.FINISHED ? "Replay" : "Resume");
+        pause.putValue(Action.SMALL_ICON, new GlyphIcon(playing || state == null ? GlyphIcon.Shape.PAUSE
                 : state == Playback.State.FINISHED ? GlyphIcon.Shape.RESTART : GlyphIcon.Shape.PLAY, 14, null));
     }
 

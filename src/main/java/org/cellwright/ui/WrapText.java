@@ -18,7 +18,7 @@ import javax.swing.text.View;
  * with every slider move use it. Its preferred height is that of the text wrapped at its current width;
  * when the width changes it asks its parents to lay out again.
  */
-final class WrapText extends JTextArea {
+class WrapText extends JTextArea {
 
     private static final long serialVersionUID = 1L;
 
@@ -69,7 +69,8 @@ final class WrapText extends JTextArea {
     @Override
     public Dimension getPreferredSize() {
         Insets in = getInsets();
-        int w = (getWidth() > 0 ? getWidth() : wrapWidth) - in.left - in.right;
+        // measured 2 px narrower than drawn: a word that just fits when measured may wrap when drawn
+        int w = (getWidth() > 0 ? getWidth() : wrapWidth) - in.left - in.right - 2;
         View root = getUI().getRootView(this);
         root.setSize(Math.max(1, w), Integer.MAX_VALUE);
         int h = (int) Math.ceil(root.getPreferredSpan(View.Y_AXIS));
@@ -81,8 +82,14 @@ final class WrapText extends JTextArea {
         return new Dimension(40, getPreferredSize().height);
     }
 
+    /** @return the colour key the text is drawn in, or null for the label colour */
+    protected String colourKey() {
+        return colourKey;
+    }
+
     @Override
     public Color getForeground() {
+        String colourKey = colourKey();
         if (colourKey == null) {
             Color c = UIManager.getColor("Label.foreground");
             return c != null ? c : super.getForeground();

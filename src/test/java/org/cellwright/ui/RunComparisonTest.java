@@ -30,8 +30,11 @@ class RunComparisonTest {
         assertEquals("#4  2 A/dm2", c.pinned().get(0).label(), "the oldest were dropped");
         RunSummary s = run.summary();
         assertEquals(String.format(Locale.ROOT, "%.1f", 100 * s.currentEfficiency()), c.getValueAt(1, 2));
-        assertEquals(String.format(Locale.ROOT, "%.4g Sn", s.depositKg().get("Sn") * 1000), c.getValueAt(1, 1));
-        assertEquals("now: 2 A/dm2", c.getValueAt(0, 0));
+        assertEquals(String.format(Locale.ROOT, "%.3g g Sn", s.depositKg().get("Sn") * 1000), c.getValueAt(1, 1));
+        assertEquals("now", c.getValueAt(0, 0));
+        assertEquals("#4", c.getValueAt(1, 0));
+        assertEquals("now: 2 A/dm2", c.describe(0));
+        assertEquals("#4  2 A/dm2", c.describe(1));
     }
 
     /** A new run shown must not clear the selected (drawn) reference. */

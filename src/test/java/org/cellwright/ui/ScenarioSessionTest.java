@@ -81,6 +81,7 @@ class ScenarioSessionTest {
         });
         await(() -> director.state() != null);
         assertEquals(Playback.State.PLAYING, edt(director::state));
+        assertTrue(edt(() -> SteadyAxes.frozen(director.charts())), "the axes hold still while the run plays");
         edt(() -> {
             director.jumpToEnd();
             return null;
@@ -102,6 +103,7 @@ class ScenarioSessionTest {
         double gap = edt(() -> director.result().scenario().cell().gapM());
         assertEquals(parseMm(gapText), gap, 1e-15);
         assertEquals(Playback.State.FINISHED, edt(director::state), "a slider replots the whole run at once");
+        assertFalse(edt(() -> SteadyAxes.frozen(director.charts())), "a replot lets the axes follow the data");
         assertNotNull(edt(director::reference));
         assertEquals(edt(() -> director.result().trace().size()), edt(() -> director.charts().model().pointCount()));
 
