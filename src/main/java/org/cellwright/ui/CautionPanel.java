@@ -29,6 +29,8 @@ final class CautionPanel extends JPanel {
             + " chemicals and licensed practice.";
 
     private transient CautionList list;
+    private final java.util.List<WrapText> safetyTexts = new java.util.ArrayList<>();
+    private final java.util.List<WrapText> noteTexts = new java.util.ArrayList<>();
 
     CautionPanel() {
         super(new GridBagLayout());
@@ -48,8 +50,24 @@ final class CautionPanel extends JPanel {
         if (cautions.equals(list)) {
             return;
         }
+        boolean sameShape = list != null && topics(list.safety()).equals(topics(cautions.safety()))
+                && list.notes().size() == cautions.notes().size();
         this.list = cautions;
+        if (sameShape) {
+            // only figures in the sentences changed (litres of gas, g/L): new text, same components
+            for (int i = 0; i < cautions.safety().size(); i++) {
+                safetyTexts.get(i).show(cautions.safety().get(i).text());
+            }
+            for (int i = 0; i < cautions.notes().size(); i++) {
+                noteTexts.get(i).show(cautions.notes().get(i).full());
+            }
+            return;
+        }
         render();
+    }
+
+    private static java.util.List<String> topics(java.util.List<CautionList.Caution> l) {
+        return l.stream().map(CautionList.Caution::topic).toList();
     }
 
     /** @return what is shown */
@@ -59,6 +77,8 @@ final class CautionPanel extends JPanel {
 
     private void render() {
         removeAll();
+        safetyTexts.clear();
+        noteTexts.clear();
         int row = 0;
         if (list == null) {
             add(text("The safety cautions that the scenario triggers appear here once it has run.", Font.PLAIN), at(0, 0));
@@ -80,12 +100,16 @@ final class CautionPanel extends JPanel {
         add(head, at(row++, 2));
         for (CautionList.Caution c : list.safety()) {
             add(text(c.topic(), Font.BOLD), at(row++, 6));
-            add(text(c.text(), Font.PLAIN), at(row++, 0));
+            WrapText t = text(c.text(), Font.PLAIN);
+            safetyTexts.add(t);
+            add(t, at(row++, 0));
         }
         if (!list.notes().isEmpty()) {
             add(text("Chemistry and data notes", Font.BOLD), at(row++, 10));
             for (CautionList.Caution c : list.notes()) {
-                add(text(c.full(), Font.PLAIN), at(row++, 3));
+                WrapText t = text(c.full(), Font.PLAIN);
+                noteTexts.add(t);
+                add(t, at(row++, 3));
             }
         }
         add(new WrapText(DEFER, "caution.foreground", -1, Font.ITALIC, WRAP), at(row, 10));

@@ -3,6 +3,7 @@ package org.cellwright.ui;
 import java.util.List;
 import java.util.Locale;
 
+import javax.swing.SwingUtilities;
 import javax.swing.Timer;
 
 import org.cellwright.cell.Scenario;
@@ -152,13 +153,9 @@ final class RunDirector {
         lastEngineMs = computeNanos / 1e6;
         result = run;
         ensureCharts(run);
-        panels.comparison().setCurrent(request.label(), run);
-        panels.summary().show(request.label(), run);
-        CautionList cautions = CautionList.of(run.summary().warnings());
-        panels.cautions().show(cautions);
-        panels.strip().show(cautions);
         playback = new Playback(run.trace(), run.events(), speed.simSecondsPerSecond());
         if (request.purpose() == Purpose.PLAY) {
+            describe(request, run);
             SteadyAxes.freeze(charts, run.trace());
             charts.setEvents(List.of());
             panels.events().show(List.of());
@@ -172,13 +169,28 @@ final class RunDirector {
             SteadyAxes.release(charts);
             model.replaceWith(run.trace());
             charts.setEvents(run.events());
-            panels.events().show(run.events());
             clock.expect(request.changedAtNanos(), computeNanos, panels.charts().chartCount());
+            // the charts draw first; the panels beside them follow in the next event
+            SwingUtilities.invokeLater(() -> {
+                if (result == run) {
+                    describe(request, run);
+                    panels.events().show(run.events());
+                }
+            });
             panels.status().say("Recomputed: " + request.label());
         }
         showHead();
         showTiming(null);
         stateChanged.run();
+    }
+
+    /** Shows a run's summary, cautions and place in the comparison. */
+    private void describe(Request request, RunResult run) {
+        panels.comparison().setCurrent(request.label(), run);
+        panels.summary().show(request.label(), run);
+        CautionList cautions = CautionList.of(run.summary().warnings());
+        panels.cautions().show(cautions);
+        panels.strip().show(cautions);
     }
 
     /** Puts the run's layout, span and gap on the charts, making new charts when the species differ. */

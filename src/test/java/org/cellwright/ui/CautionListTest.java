@@ -33,6 +33,25 @@ class CautionListTest {
     }
 
     @Test
+    void thePanelKeepsItsRowsWhenOnlyFiguresChange() throws Exception {
+        javax.swing.SwingUtilities.invokeAndWait(() -> {
+            CautionPanel p = new CautionPanel();
+            p.show(CautionList.of(List.of("Hydrogen: about 3.00 L of hydrogen.", "Tin(IV) builds up to 11 g/L.")));
+            int parts = p.getComponentCount();
+            java.awt.Component first = p.getComponent(2);
+            CautionList changed = CautionList.of(List.of("Hydrogen: about 5.33 L of hydrogen.", "Tin(IV) builds up to 13 g/L."));
+            p.show(changed);
+            assertEquals(changed, p.shown());
+            assertEquals(parts, p.getComponentCount());
+            assertTrue(first == p.getComponent(2), "same components, new text");
+            assertEquals("about 5.33 L of hydrogen.", ((WrapText) p.getComponent(2)).getText());
+            p.show(CautionList.of(List.of("Chlorine: toxic.")));
+            assertEquals("Safety cautions", ((javax.swing.JLabel) p.getComponent(0)).getText());
+            assertEquals("toxic.", ((WrapText) p.getComponent(2)).getText());
+        });
+    }
+
+    @Test
     void noCautionsSaysSo() {
         assertTrue(CautionStrip.line(CautionList.of(List.of())).startsWith("No safety cautions"));
     }
