@@ -27,7 +27,7 @@ import org.junit.jupiter.api.Test;
 
 /**
  * Opens the real window under a display (Xvfb in CI), loads the default scenario, runs it, lets it play,
- * jumps to the end, drags the gap slider and measures the time from each move to the last chart redrawn,
+ * jumps to the end, moves the five sliders in turn and measures the time from each move to the last chart redrawn,
  * pins a run and compares, scrubs back, switches to dark, and saves screenshots under target/. Skipped
  * without a display. Run by the surefire execution "window-smoke" (without -Djava.awt.headless=true).
  */
@@ -37,9 +37,9 @@ class CellwrightWindowSmokeTest {
     private static final int LOAD_S = 60;
 
     /** Slider moves before the measured ones: the first runs include the JIT compiling the engine. */
-    private static final int WARM_UP = 4;
-    /** Slider moves measured. */
-    private static final int MEASURED = 12;
+    private static final int WARM_UP = 5;
+    /** Slider moves measured: three rounds of the five sliders. */
+    private static final int MEASURED = 15;
 
     private CellwrightWindow window;
 
@@ -87,17 +87,17 @@ class CellwrightWindowSmokeTest {
                 "a graphite anode in a chloride bath: the chlorine caution shows");
         shoot("window-light.png");
 
-        // drag the gap slider in steps; each step waits for its replot before the next
-        JSlider gap = edt(() -> window.knobs().slider(Knob.GAP));
-        int start = edt(gap::getValue);
-        for (int i = 1; i <= WARM_UP + MEASURED; i++) {
-            int step = i;
+        // move the five sliders in turn, a few steps up, then down; each move waits for its replot
+        for (int i = 0; i < WARM_UP + MEASURED; i++) {
+            Knob k = Knob.values()[i % Knob.values().length];
+            int delta = (i / Knob.values().length) % 2 == 0 ? 15 : -15;
             int before = edt(() -> window.director().clock().history().size());
             edt(() -> {
-                gap.setValue(start - 20 * step);
+                JSlider s = window.knobs().slider(k);
+                s.setValue(s.getValue() + delta);
                 return null;
             });
-            await("replot " + step, 20, () -> edt(() -> window.director().clock().history().size() > before));
+            await("replot " + i + " (" + k + ")", 20, () -> edt(() -> window.director().clock().history().size() > before));
         }
         List<ReplotClock.Latency> all = edt(() -> window.director().clock().history());
         List<ReplotClock.Latency> measured = all.subList(WARM_UP, all.size());
@@ -107,6 +107,8 @@ class CellwrightWindowSmokeTest {
                 .toArray()[measured.size() / 2];
         String gapText = edt(() -> window.knobs().valueText(Knob.GAP));
         assertEquals(gapText, edt(() -> window.form().draft().get("cell.gap")), "the form follows the slider");
+        assertEquals(edt(() -> window.knobs().valueText(Knob.TEMPERATURE)),
+                edt(() -> window.form().draft().get("electrolyte.temperature")));
         Files.createDirectories(Path.of("target"));
         String report = String.format(Locale.ROOT, "slider to replot: median %.1f ms over %d moves after %d warm-up"
                 + " moves (engine median %.1f ms); the warm-up moves' median %.1f ms%n%s%n", median, MEASURED, WARM_UP,
