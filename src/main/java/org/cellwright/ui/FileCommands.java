@@ -53,6 +53,7 @@ final class FileCommands {
         return answer == JOptionPane.NO_OPTION;
     }
 
+    /** Starts a new scenario from a shipped one. */
     void newFromTemplate() {
         if (sessions.get() != null && discardOrSave()) {
             ScenarioTemplate t = dialogs.chooseTemplate();
@@ -62,6 +63,7 @@ final class FileCommands {
         }
     }
 
+    /** Opens a scenario file; a file that does not read leaves everything as it was. */
     void open() {
         if (sessions.get() == null || !discardOrSave()) {
             return;
@@ -79,6 +81,7 @@ final class FileCommands {
         }
     }
 
+    /** Saves to the scenario's file, or asks for one. */
     void save() {
         if (sessions.get() == null) {
             return;
@@ -90,6 +93,7 @@ final class FileCommands {
         saveTo(sessions.get().file());
     }
 
+    /** Saves to a file the user chooses. */
     void saveAs() {
         if (sessions.get() != null) {
             String base = sessions.get().file() != null ? sessions.get().file().getFileName().toString() : "scenario.toml";
@@ -111,6 +115,7 @@ final class FileCommands {
         }
     }
 
+    /** @param kind what to export, or null to let the user choose by file type */
     void export(RunExport.Kind kind) {
         RunResult run = directors.get() == null ? null : directors.get().result();
         if (run == null) {
@@ -127,12 +132,14 @@ final class FileCommands {
         status.busy(true);
         status.say("Exporting " + p.getFileName() + "...");
         new SwingWorker<Void, Void>() {
-                    protected Void doInBackground() throws IOException {
+            @Override
+            protected Void doInBackground() throws IOException {
                 RunExport.write(run, label, ref == null ? null : ref.run(), ref == null ? null : ref.name(), darkSheet, p);
                 return null;
             }
 
-                    protected void done() {
+            @Override
+            protected void done() {
                 status.busy(false);
                 try {
                     get();
@@ -145,5 +152,4 @@ final class FileCommands {
             }
         }.execute();
     }
-
 }

@@ -6,6 +6,8 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 import static org.junit.jupiter.api.Assumptions.assumeFalse;
 
 import java.awt.GraphicsEnvironment;
+import java.awt.Robot;
+import java.awt.event.KeyEvent;
 import java.awt.image.BufferedImage;
 import java.io.IOException;
 import java.nio.charset.StandardCharsets;
@@ -19,6 +21,7 @@ import java.util.concurrent.atomic.AtomicReference;
 import javax.imageio.ImageIO;
 import javax.swing.JSlider;
 import javax.swing.SwingUtilities;
+import javax.swing.text.JTextComponent;
 
 import org.cellwright.sim.RunEvent;
 import org.cellwright.sim.RunResult;
@@ -63,11 +66,38 @@ class CellwrightWindowSmokeTest {
         assertEquals("tin-stripping-liquor.toml", edt(() -> window.session().name()));
         assertEquals(0, (int) edt(() -> window.form().problemsShown()), "the default scenario shows no problems");
 
+        // the keys, typed as a person would: F5 runs, Space pauses, but in a text field Space is a space
+        Robot robot = new Robot();
+        robot.setAutoDelay(30);
         edt(() -> {
-            window.actions().run.actionPerformed(null);
+            window.frame().toFront();
+            window.knobs().slider(Knob.GAP).requestFocusInWindow();
             return null;
         });
-        await("the run starts playing", 30, () -> edt(() -> window.director().state() == Playback.State.PLAYING));
+        await("a slider has the keyboard", 10, () -> edt(() -> window.knobs().slider(Knob.GAP).isFocusOwner()));
+        type(robot, KeyEvent.VK_F5);
+        await("F5 starts the run playing", 30, () -> edt(() -> window.director().state() == Playback.State.PLAYING));
+        type(robot, KeyEvent.VK_SPACE);
+        await("Space pauses", 10, () -> edt(() -> window.director().state() == Playback.State.PAUSED));
+        JTextComponent title = edt(() -> window.form().field("title").orElseThrow());
+        String titleText = edt(title::getText);
+        edt(() -> {
+            title.requestFocusInWindow();
+            title.setCaretPosition(0);
+            return null;
+        });
+        await("the title field has the keyboard", 10, () -> edt(title::isFocusOwner));
+        type(robot, KeyEvent.VK_SPACE);
+        await("Space types a space in a text field", 10, () -> edt(title::getText).equals(" " + titleText));
+        assertEquals(Playback.State.PAUSED, edt(() -> window.director().state()), "and does not resume the run");
+        edt(() -> {
+            title.setText(titleText);
+            window.knobs().slider(Knob.GAP).requestFocusInWindow();
+            return null;
+        });
+        await("a slider has the keyboard again", 10, () -> edt(() -> window.knobs().slider(Knob.GAP).isFocusOwner()));
+        type(robot, KeyEvent.VK_SPACE);
+        await("Space resumes", 10, () -> edt(() -> window.director().state() == Playback.State.PLAYING));
         Thread.sleep(1500);
         RunResult run = edt(() -> window.director().result());
         int midway = edt(() -> window.director().shown().size());
@@ -147,6 +177,11 @@ class CellwrightWindowSmokeTest {
         });
         assertTrue(edt(window::isDark));
         shoot("window-dark.png");
+    }
+
+    private static void type(Robot robot, int key) {
+        robot.keyPress(key);
+        robot.keyRelease(key);
     }
 
     private void shoot(String name) throws Exception {
