@@ -87,6 +87,14 @@ public final class ChartSheet implements Drawable {
         if (s.targetMetal() != null) {
             parts.add(String.format(Locale.ROOT, "current efficiency %.1f %%", 100 * s.currentEfficiency()));
         }
+        if (s.morphologyFinal() != null) {
+            parts.add("deposit " + s.morphologyFinal());
+        }
+        if (s.shortCircuitS() != null) {
+            parts.add("shorted at " + RunClock.format(s.shortCircuitS()));
+        } else if (s.shortCircuitForecastS() != null) {
+            parts.add("short foreseen at " + RunClock.format(s.shortCircuitForecastS()));
+        }
         parts.add(String.format(Locale.ROOT, "mean cell voltage %.2f V", s.cellVoltageMeanV()));
         if (Double.isFinite(s.specificEnergyJPerKg())) {
             parts.add(String.format(Locale.ROOT, "%.3g kWh/kg", s.specificEnergyJPerKg() / J_PER_KWH));

@@ -74,6 +74,7 @@ public final class RunChartModel {
         current.addSeries(new XYSeries("current"));
         efficiency.addSeries(new XYSeries("instantaneous efficiency"));
         efficiency.addSeries(new XYSeries("cumulative efficiency"));
+        efficiency.addSeries(new XYSeries("share of limiting current"));
         for (String m : this.metalSymbols) {
             deposit.addSeries(new XYSeries(m));
         }
@@ -206,6 +207,9 @@ public final class RunChartModel {
         if (p.chargeC() > 0) {
             efficiency.getSeries(1).add(x, 100 * p.cumulativeEfficiency(), false);
         }
+        if (s.currentA() > 0 && !s.shorted()) {
+            efficiency.getSeries(2).add(x, 100 * s.targetLimitRatio(), false);
+        }
         double[] kg = p.depositKg();
         for (int m = 0; m < kg.length && m < deposit.getSeriesCount(); m++) {
             deposit.getSeries(m).add(x, kg[m] * 1000, false);
@@ -274,8 +278,9 @@ public final class RunChartModel {
     }
 
     /**
-     * @return instantaneous (series 0) and cumulative (series 1) current efficiency (%); an instant without
-     *     current, or without charge passed yet, has no efficiency and gets no point
+     * @return instantaneous (series 0) and cumulative (series 1) current efficiency (%), and the target metal's
+     *     partial current as a share of its limiting current (series 2, %; it sets the deposit's form); an
+     *     instant without current, or without charge passed yet, has no efficiency and gets no point
      */
     public XYSeriesCollection efficiency() {
         return efficiency;

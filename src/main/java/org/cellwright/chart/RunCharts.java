@@ -275,6 +275,8 @@ public final class RunCharts {
         paintLine(cp, RunPlots.LIVE, 0, style.series(0));
         paintLine(cp, RunPlots.EFFICIENCY, 0, style.series(4));
         paintLine(cp, RunPlots.EFFICIENCY, 1, style.series(2));
+        paintLine(cp, RunPlots.EFFICIENCY, 2, style.series(5));
+        cp.getRenderer(RunPlots.EFFICIENCY).setSeriesStroke(2, style.seriesStroke(9), false);
         cp.getRangeAxis(1).setLabelPaint(style.text());
         paintLine(temperature.getXYPlot(), RunPlots.LIVE, 0, style.series(1));
         paintLine(dendrite.getXYPlot(), RunPlots.LIVE, 0, style.series(3));

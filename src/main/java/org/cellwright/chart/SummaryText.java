@@ -71,13 +71,33 @@ public final class SummaryText {
                 conc.append(conc.length() == 0 ? "" : ", ").append(String.format(Locale.ROOT, "%s %.4g", sp, c / 1000));
             }
         });
-        out.add("  final bath       " + conc + " mol/L");
+        boolean divided = !s.finalAnolyteConcentrationMolPerM3().isEmpty();
+        out.add((divided ? "  final catholyte  " : "  final bath       ") + conc + " mol/L");
+        if (divided) {
+            StringBuilder an = new StringBuilder();
+            s.finalAnolyteConcentrationMolPerM3().forEach((sp, c) -> {
+                if (c > 1e-6) {
+                    an.append(an.length() == 0 ? "" : ", ").append(String.format(Locale.ROOT, "%s %.4g", sp, c / 1000));
+                }
+            });
+            out.add("  final anolyte    " + an + " mol/L");
+        }
+        StringBuilder corr = new StringBuilder();
+        s.corrodedKg().forEach((m, kg) -> {
+            if (kg * 1000 >= 5e-4) {
+                corr.append(corr.length() == 0 ? "" : ", ").append(String.format(Locale.ROOT, "%s %.4g g", m, kg * 1000));
+            }
+        });
+        if (corr.length() > 0) {
+            out.add("  redissolved      " + corr + " (oxidants took electrons from the deposit)");
+        }
         out.add("  where the charge went");
         out.addAll(ChargeShares.lines(r));
         if (s.shortCircuitS() != null) {
             out.add("  short circuit    at " + RunClock.format(s.shortCircuitS()));
         } else if (s.shortCircuitForecastS() != null) {
-            out.add("  short forecast   at " + RunClock.format(s.shortCircuitForecastS()));
+            out.add("  short forecast   at " + RunClock.format(s.shortCircuitForecastS())
+                    + " (if the end conditions held)");
         }
         if (s.morphologyFinal() != null) {
             out.add("  deposit form     " + s.morphologyFinal());

@@ -15,14 +15,20 @@ import org.cellwright.chem.ElectrodeMaterial;
 /**
  * Reads {@code [cathode]}, {@code [anode]} (material and area, both required) and {@code [cell]}: gap
  * (required), agitation preset or diffusion-layer thickness (default the "still" preset), ambient
- * temperature (default the bath temperature), contact resistance (default 0 ohm) and heat-loss
- * conductance (default: estimated by the engine).
+ * temperature (default the bath temperature), contact resistance (default 0 ohm), heat-loss
+ * conductance (default: estimated by the engine) and the compartments ({@link CompartmentReader}).
  */
 final class CellReader {
 
     static final Set<String> ELECTRODE_KEYS = Set.of("material", "area");
-    static final Set<String> CELL_KEYS = Set.of("gap", "agitation", "diffusion_layer", "ambient",
-            "contact_resistance", "heat_loss");
+    static final Set<String> CELL_KEYS;
+
+    static {
+        Set<String> keys = new java.util.HashSet<>(Set.of("gap", "agitation", "diffusion_layer", "ambient",
+                "contact_resistance", "heat_loss"));
+        keys.addAll(CompartmentReader.KEYS);
+        CELL_KEYS = Set.copyOf(keys);
+    }
     /** Default agitation: a still bath, the thickest layer and so the most cautious limiting current. */
     static final AgitationPreset DEFAULT_AGITATION = AgitationPreset.STILL;
 
@@ -66,9 +72,12 @@ final class CellReader {
 
     /**
      * @param bathTemperatureK the electrolyte's start temperature (K), NaN when it could not be read
+     * @param volumeM3 the electrolyte's volume (m3), NaN when it could not be read
+     * @param anolyte the anolyte's composition, when {@code [electrolyte.anolyte]} is given and valid
      * @return the cell setup, or empty when missing or wrong (reported)
      */
-    Optional<CellSetup> cell(SectionReader root, double bathTemperatureK) {
+    Optional<CellSetup> cell(SectionReader root, double bathTemperatureK, double volumeM3,
+                             Optional<java.util.Map<String, Double>> anolyte) {
         Optional<SectionReader> section = root.table("cell");
         if (section.isEmpty()) {
             if (!root.has("cell")) {
@@ -89,13 +98,15 @@ final class CellReader {
                 : 0.0;
         Double heatLoss = c.quantity("heat_loss", Dimension.HEAT_CONDUCTANCE, Range.POSITIVE).orElse(null);
         boolean heatLossBad = c.has("heat_loss") && heatLoss == null;
-        if (gap.isEmpty() || agitation.isEmpty() || Double.isNaN(ambient) || Double.isNaN(contact) || heatLossBad) {
+        var compartments = CompartmentReader.read(c, root, gap.orElse(Double.NaN), volumeM3, anolyte);
+        if (gap.isEmpty() || agitation.isEmpty() || Double.isNaN(ambient) || Double.isNaN(contact) || heatLossBad
+                || compartments.isEmpty()) {
             return Optional.empty();
         }
         if (gap.get() > 1.0) {
             c.log().warning(c.at("gap"), c.key("gap"), "a gap of more than 1 m is unusual; check the unit");
         }
-        return Optional.of(new CellSetup(gap.get(), agitation.get(), ambient, contact, heatLoss));
+        return Optional.of(new CellSetup(gap.get(), agitation.get(), ambient, contact, heatLoss, compartments.get()));
     }
 
     private Optional<Agitation> agitation(SectionReader c) {

@@ -13,11 +13,12 @@ import org.cellwright.chem.PhysicalConstants;
  * Reads {@code [electrolyte]} and {@code [electrolyte.composition]}: volume (required), temperature
  * (default 25 C), an optional pinned conductivity, and the concentration of each species (required, at
  * least one), resolved to canonical names and mol/m3. Warns when the composition is far from
- * electroneutral.
+ * electroneutral. {@code [electrolyte.anolyte]}, read the same way, is the starting anolyte of a
+ * two-compartment cell (see {@link CellReader}).
  */
 final class ElectrolyteReader {
 
-    static final Set<String> KEYS = Set.of("volume", "temperature", "conductivity", "composition");
+    static final Set<String> KEYS = Set.of("volume", "temperature", "conductivity", "composition", "anolyte");
     /** Default bath temperature (K): 25 C, the reference temperature of the data library. */
     static final double DEFAULT_TEMPERATURE_K = PhysicalConstants.REFERENCE_TEMPERATURE_K;
 
@@ -55,12 +56,32 @@ final class ElectrolyteReader {
         return Optional.of(new Electrolyte(volume.get(), temperature, composition.get(), conductivity));
     }
 
+    /**
+     * @return the anolyte's starting composition when {@code [electrolyte.anolyte]} is given (empty when it is
+     *     not; a wrong one is reported and gives an empty map's absence too, see {@link #anolyteGiven})
+     */
+    Optional<Map<String, Double>> anolyte(SectionReader root) {
+        if (!anolyteGiven(root)) {
+            return Optional.empty();
+        }
+        return root.table("electrolyte").flatMap(e -> composition(e, "anolyte"));
+    }
+
+    /** @return true when the file gives {@code [electrolyte.anolyte]} */
+    static boolean anolyteGiven(SectionReader root) {
+        return root.table().get("electrolyte") instanceof TomlNode.Table t && t.get("anolyte") != null;
+    }
+
     private Optional<Map<String, Double>> composition(SectionReader e) {
         if (!e.has("composition")) {
             e.missing("composition", "{ \"Cu2+\" = \"40 g/L\" } (or a [electrolyte.composition] table)");
             return Optional.empty();
         }
-        Optional<SectionReader> table = e.table("composition");
+        return composition(e, "composition");
+    }
+
+    private Optional<Map<String, Double>> composition(SectionReader e, String tableName) {
+        Optional<SectionReader> table = e.table(tableName);
         if (table.isEmpty()) {
             return Optional.empty();
         }

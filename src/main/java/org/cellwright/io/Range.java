@@ -24,6 +24,9 @@ record Range(double lo, boolean loInclusive, double hi, String words) {
     /** A transfer coefficient; it counts the electrons of the whole reaction (see Kinetics), so 0 to 4. */
     static final Range TRANSFER_COEFFICIENT = new Range(0, true, 4, "must lie between 0 and 4");
 
+    /** A volume fraction, above zero and at most one. */
+    static final Range FRACTION = new Range(0, false, 1, "must lie above 0 and at most 1");
+
     boolean contains(double v) {
         return (loInclusive ? v >= lo : v > lo) && v <= hi && Double.isFinite(v);
     }

@@ -18,7 +18,12 @@ import org.cellwright.sim.TracePoint;
  * ({@code time_s, current_A, cell_voltage_V, cathode_potential_V, anode_potential_V, ohmic_drop_V,
  * current_efficiency, current_efficiency_cumulative, deposit_g, temperature_C, dendrite_height_mm}), then
  * one {@code c_<species>_mol_per_L} per species and one {@code i_<electrode>_<couple>_A} per reaction, then
- * the voltage breakdown, conductivity, gas fraction and the deposit of each metal.
+ * the voltage breakdown, conductivity, gas fraction and the deposit of each metal, then the deposit's growth:
+ * {@code morphology} (compact, rough, dendritic, powdery; empty while the target metal does not deposit),
+ * {@code limit_ratio} (the target metal's partial current over its limiting current, which sets the form),
+ * {@code deposit_thickness_um}, {@code gap_mm} (against which {@code dendrite_height_mm} is read) and
+ * {@code shorted}; in a two-compartment cell last one {@code c_anolyte_<species>_mol_per_L} per species (the
+ * {@code c_} columns are then the catholyte).
  */
 public final class RunCsvWriter {
 
@@ -43,6 +48,12 @@ public final class RunCsvWriter {
                 "ohmic_solution_V", "ohmic_bubbles_V", "ohmic_contacts_V", "conductivity_S_per_m", "void_fraction"));
         for (String m : r.metalSymbols()) {
             h.add("deposit_" + m + "_g");
+        }
+        h.addAll(List.of("morphology", "limit_ratio", "deposit_thickness_um", "gap_mm", "shorted"));
+        if (r.scenario().cell().compartments().twoCompartments()) {
+            for (String s : r.speciesNames()) {
+                h.add("c_anolyte_" + s + "_mol_per_L");
+            }
         }
         return h;
     }
@@ -90,6 +101,16 @@ public final class RunCsvWriter {
             num(sb, s.voidFraction());
             for (double kg : p.depositKg()) {
                 num(sb, kg * 1000);
+            }
+            sb.append(s.morphology() == null ? "" : s.morphology()).append(',');
+            num(sb, s.targetLimitRatio());
+            num(sb, s.depositThicknessM() * 1e6);
+            num(sb, r.scenario().cell().gapM() * 1000);
+            sb.append(s.shorted() ? '1' : '0').append(',');
+            if (s.anolyteConcentrationsMolPerM3() != null) {
+                for (double c : s.anolyteConcentrationsMolPerM3()) {
+                    num(sb, c / 1000);
+                }
             }
             sb.setLength(sb.length() - 1);
             sb.append('\n');

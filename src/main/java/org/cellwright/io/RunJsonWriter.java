@@ -44,6 +44,7 @@ public final class RunJsonWriter {
         m.put("target_metal", s.targetMetal());
         m.put("deposit_g", scaled(s.depositKg(), 1000));
         m.put("deposit_total_g", s.depositTotalKg() * 1000);
+        m.put("deposit_corroded_g", scaled(s.corrodedKg(), 1000));
         m.put("purity", s.purity());
         m.put("current_efficiency", s.currentEfficiency());
         m.put("energy_Wh", s.energyJ() / 3600);
@@ -51,11 +52,15 @@ public final class RunJsonWriter {
         m.put("cell_voltage_V", ordered("start", s.cellVoltageStartV(), "end", s.cellVoltageEndV(),
                 "mean", s.cellVoltageMeanV(), "max", s.cellVoltageMaxV()));
         m.put("final_concentration_mol_per_L", scaled(s.finalConcentrationMolPerM3(), 1e-3));
+        if (!s.finalAnolyteConcentrationMolPerM3().isEmpty()) {
+            m.put("final_anolyte_concentration_mol_per_L", scaled(s.finalAnolyteConcentrationMolPerM3(), 1e-3));
+        }
         m.put("gas_L", scaled(s.gasMol(), STP_L_PER_MOL));
         m.put("gas_L_at_25C", scaled(s.gasMol(), ROOM_L_PER_MOL));
         m.put("short_circuit_s", s.shortCircuitS());
         m.put("short_circuit_forecast_s", s.shortCircuitForecastS());
         m.put("morphology_final", s.morphologyFinal());
+        m.put("compartments", r.scenario().cell().compartments().kind().key());
         m.put("temperature_C", ordered("start", s.temperatureStartK() - 273.15, "end", s.temperatureEndK() - 273.15,
                 "max", s.temperatureMaxK() - 273.15));
         m.put("charge_by_reaction_C", s.reactionChargeC());

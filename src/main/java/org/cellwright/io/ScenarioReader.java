@@ -13,6 +13,7 @@ import java.util.Optional;
 import java.util.Set;
 
 import org.cellwright.cell.CellSetup;
+import org.cellwright.cell.DepositSettings;
 import org.cellwright.cell.Electrode;
 import org.cellwright.cell.Electrolyte;
 import org.cellwright.cell.PowerSupply;
@@ -36,7 +37,7 @@ import org.tomlj.TomlParseResult;
 public final class ScenarioReader {
 
     static final Set<String> ROOT_KEYS = Set.of("title", "notes", "electrolyte", "cathode", "anode", "cell",
-            "supply", "run", "species", "reaction");
+            "supply", "run", "species", "reaction", "deposit");
 
     private final ChemLibrary library;
 
@@ -138,21 +139,25 @@ public final class ScenarioReader {
         OverrideReader overrides = new OverrideReader(library);
         List<SpeciesOverride> speciesOverrides = overrides.species(root);
         SpeciesResolver species = new SpeciesResolver(library, speciesOverrides);
-        Optional<Electrolyte> electrolyte = new ElectrolyteReader(species).read(root);
+        ElectrolyteReader electrolyteReader = new ElectrolyteReader(species);
+        Optional<Electrolyte> electrolyte = electrolyteReader.read(root);
+        Optional<java.util.Map<String, Double>> anolyte = electrolyteReader.anolyte(root);
         CellReader cellReader = new CellReader(library);
         Optional<Electrode> cathode = cellReader.electrode(root, "cathode");
         Optional<Electrode> anode = cellReader.electrode(root, "anode");
         double bathK = electrolyte.map(Electrolyte::temperatureK).orElse(Double.NaN);
-        Optional<CellSetup> cell = cellReader.cell(root, bathK);
+        Optional<CellSetup> cell = cellReader.cell(root, bathK,
+                electrolyte.map(Electrolyte::volumeM3).orElse(Double.NaN), anolyte);
         Optional<PowerSupply> supply = new SupplyReader().read(root, cathode.map(Electrode::areaM2).orElse(Double.NaN));
         Optional<RunSettings> run = new RunReader(library, species).read(root, electrolyte);
         List<ReactionOverride> reactionOverrides = overrides.reactions(root);
+        Optional<DepositSettings> deposit = DepositReader.read(root);
         if (root.log().hasErrors() || electrolyte.isEmpty() || cathode.isEmpty() || anode.isEmpty()
-                || cell.isEmpty() || supply.isEmpty() || run.isEmpty()) {
+                || cell.isEmpty() || supply.isEmpty() || run.isEmpty() || deposit.isEmpty()) {
             return Optional.empty();
         }
         return Optional.of(new Scenario(title, notes, electrolyte.get(), cathode.get(), anode.get(), cell.get(),
-                supply.get(), run.get(), speciesOverrides, reactionOverrides));
+                supply.get(), run.get(), speciesOverrides, reactionOverrides, deposit.get()));
     }
 
     private static ScenarioException fileProblem(String file, String message) {

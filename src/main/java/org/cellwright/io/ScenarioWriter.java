@@ -8,11 +8,14 @@ import java.util.List;
 import java.util.Map;
 
 import org.cellwright.cell.CellSetup;
+import org.cellwright.cell.Compartments;
 import org.cellwright.cell.ControlMode;
+import org.cellwright.cell.DepositSettings;
 import org.cellwright.cell.Electrode;
 import org.cellwright.cell.Electrolyte;
 import org.cellwright.cell.PowerSupply;
 import org.cellwright.cell.ReactionOverride;
+import org.cellwright.cell.Separator;
 import org.cellwright.cell.RunSettings;
 import org.cellwright.cell.Scenario;
 import org.cellwright.cell.SetPoint;
@@ -78,11 +81,17 @@ public final class ScenarioWriter {
             line("notes", str(s.notes()));
         }
         electrolyte(s.electrolyte());
+        if (s.cell().compartments().anolyteCompositionMolPerM3() != null) {
+            header("electrolyte.anolyte");
+            s.cell().compartments().anolyteCompositionMolPerM3()
+                    .forEach((name, c) -> line(str(name), str(concentration(name, c))));
+        }
         electrode("cathode", s.cathode());
         electrode("anode", s.anode());
         cell(s.cell());
         supply(s.supply());
         run(s.run());
+        deposit(s.deposit());
         for (SpeciesOverride o : s.speciesOverrides()) {
             species(o);
         }
@@ -124,6 +133,45 @@ public final class ScenarioWriter {
         if (c.heatLossWPerK() != null) {
             line("heat_loss", q(c.heatLossWPerK(), Dimension.HEAT_CONDUCTANCE, List.of("W/K")));
         }
+        compartments(c.compartments());
+    }
+
+    private void compartments(Compartments c) {
+        if (!c.twoCompartments()) {
+            return;
+        }
+        line("compartments", str(c.kind().key()));
+        if (c.anolyteVolumeM3() != null) {
+            line("anolyte_volume", q(c.anolyteVolumeM3(), Dimension.VOLUME,
+                    c.anolyteVolumeM3() < 10 ? List.of("L", "mL") : List.of("m3")));
+        }
+        Separator s = c.separator();
+        if (s != null) {
+            line("separator", str(s.kind().key()));
+            line("separator_thickness", q(s.thicknessM(), Dimension.LENGTH, List.of("mm", "um", "cm")));
+            line("separator_porosity", QuantityFormat.plain(s.porosity()));
+            if (s.areaM2() != null) {
+                line("separator_area", q(s.areaM2(), Dimension.AREA, List.of(s.areaM2() < 1.0e-2 ? "cm2" : "dm2", "m2")));
+            }
+            if (s.conductivitySPerM() != null) {
+                line("separator_conductivity", q(s.conductivitySPerM(), Dimension.CONDUCTIVITY, List.of("S/m", "mS/cm")));
+            }
+        }
+        if (c.kind() == Compartments.Kind.ZONES) {
+            line("zone_exchange", q(c.zoneExchangeM3PerS(), Dimension.VOLUME_FLOW, List.of("L/min", "L/h", "m3/s")));
+        }
+    }
+
+    private void deposit(DepositSettings d) {
+        if (d.equals(DepositSettings.defaults())) {
+            return;
+        }
+        header("deposit");
+        line("additives", Boolean.toString(d.additives()));
+        line("tip_radius", q(d.tipRadiusM(), Dimension.LENGTH, List.of("um", "mm")));
+        line("initial_protrusion", q(d.initialProtrusionM(), Dimension.LENGTH, List.of("um", "mm")));
+        line("short_resistance", q(d.shortResistanceOhm(), Dimension.RESISTANCE,
+                List.of(d.shortResistanceOhm() < 1 ? "mohm" : "ohm")));
     }
 
     private void supply(PowerSupply p) {

@@ -5,6 +5,7 @@ import org.cellwright.cell.Scenario;
 import org.cellwright.chem.Participant;
 import org.cellwright.chem.Phase;
 import org.cellwright.chem.PhysicalConstants;
+import org.cellwright.sim.deposit.Morphology;
 
 /**
  * The rates of change of the cell's state: the model, separate from any integrator.
@@ -16,7 +17,10 @@ import org.cellwright.chem.PhysicalConstants;
  * H+ and OH- are tied by water's ion product (their neutralisation is taken as instantaneous). Dissolved
  * chlorine (made at the anode until the bath is saturated) oxidises reductants or slowly degasses.
  * Heat: Joule heat in the gap plus the heat of every overpotential, less a loss to ambient through a lumped
- * conductance.
+ * conductance. In a two-compartment cell the cathode's reactions change the catholyte, the anode's the
+ * anolyte, bulk reactions run in each, and species cross between them ({@link CompartmentExchange}). The
+ * dendrite tip of the target metal rises by {@link DendriteGrowth}; once it has shorted the cell, the current
+ * passes through the short and no electrode reaction runs.
  */
 public final class CellRates implements FirstOrderDifferentialEquations {
 
@@ -43,6 +47,12 @@ public final class CellRates implements FirstOrderDifferentialEquations {
     private final int[] slotGas;
     private final double[] slotGasNu;
     private final double[] rate;
+    private final double[] rateA;
+    private final double[] flux;
+    private final DendriteGrowth dendrite;
+    private final double catholyteM3;
+    private final double anolyteM3;
+    private final boolean additives;
 
     /**
      * @param sc the scenario
@@ -51,13 +61,20 @@ public final class CellRates implements FirstOrderDifferentialEquations {
     public CellRates(Scenario sc, ReactionNetwork net) {
         this.net = net;
         int slots = net.cathodeSlots.size() + net.anodeSlots.size();
-        this.layout = new StateLayout(net.species().size(), net.depositMetals().size(), slots);
+        this.layout = new StateLayout(net.species().size(), net.depositMetals().size(), slots,
+                sc.cell().compartments().twoCompartments());
         this.op = new OperatingPoint(sc, net, layout);
         this.volumeM3 = sc.electrolyte().volumeM3();
+        this.catholyteM3 = op.compartments.catholyteM3();
+        this.anolyteM3 = op.compartments.anolyteM3();
+        this.dendrite = new DendriteGrowth(sc, net);
+        this.additives = sc.deposit().additives();
         this.ambientK = sc.cell().ambientK();
         this.heatLossWPerK = sc.cell().heatLossWPerK() != null ? sc.cell().heatLossWPerK()
                 : defaultHeatLoss(volumeM3);
         this.rate = new double[net.species().size()];
+        this.rateA = layout.twoCompartments ? new double[rate.length] : rate;
+        this.flux = new double[rate.length];
         slotNu = new double[slots][];
         slotSpecies = new int[slots][];
         slotWater = new double[slots];
@@ -67,18 +84,28 @@ public final class CellRates implements FirstOrderDifferentialEquations {
             prepareSlot(k, op.slot(k));
         }
         initial = new double[layout.size];
-        for (var e : sc.electrolyte().compositionMolPerM3().entrySet()) {
+        fillBlock(sc.electrolyte().compositionMolPerM3(), 0);
+        if (layout.twoCompartments) {
+            var anolyte = sc.cell().compartments().anolyteCompositionMolPerM3();
+            fillBlock(anolyte != null ? anolyte : sc.electrolyte().compositionMolPerM3(), layout.anolyte0);
+        }
+        initial[layout.temperature] = sc.electrolyte().temperatureK();
+        initial[layout.dendrite] = Math.log(dendrite.initialHeightM());
+    }
+
+    /** Puts a composition into the concentration block at {@code offset}, H+ as the net acidity. */
+    private void fillBlock(java.util.Map<String, Double> composition, int offset) {
+        for (var e : composition.entrySet()) {
             int j = net.indexOf(net.species().stream().map(s -> s.name())
                     .filter(n -> org.cellwright.chem.SpeciesName.candidates(e.getKey()).contains(n))
                     .findFirst().orElse(e.getKey()));
             if (j >= 0) {
-                initial[j] = e.getValue();
+                initial[offset + j] = e.getValue();
             }
         }
         if (net.waterEquilibrium()) {
-            initial[net.hIndex] = initial[net.hIndex] - initial[net.ohIndex];
+            initial[offset + net.hIndex] = initial[offset + net.hIndex] - initial[offset + net.ohIndex];
         }
-        initial[layout.temperature] = sc.electrolyte().temperatureK();
     }
 
     /**
@@ -127,6 +154,9 @@ public final class CellRates implements FirstOrderDifferentialEquations {
         for (int j = 0; j < layout.species; j++) {
             if (!(net.waterEquilibrium() && j == net.hIndex)) {
                 idx.add(j);
+                if (layout.twoCompartments) {
+                    idx.add(layout.anolyte0 + j);
+                }
             }
         }
         for (int m = 0; m < layout.metals; m++) {
@@ -165,6 +195,9 @@ public final class CellRates implements FirstOrderDifferentialEquations {
     private void fillRates(double[] yDot) {
         java.util.Arrays.fill(yDot, 0);
         java.util.Arrays.fill(rate, 0);
+        if (rateA != rate) {
+            java.util.Arrays.fill(rateA, 0);
+        }
         int nc = op.cathodeI.length;
         int slots = nc + op.anodeI.length;
         double heat = op.currentA * op.currentA * op.rGap;
@@ -176,8 +209,10 @@ public final class CellRates implements FirstOrderDifferentialEquations {
             heat += Math.abs(amps * (e - eq));
             yDot[layout.reactionCharge0 + k] = amps;
             double xi = -amps / (s.n() * PhysicalConstants.FARADAY);
+            double[] into = k < nc ? rate : rateA;
+            double volume = k < nc ? catholyteM3 : anolyteM3;
             for (int i = 0; i < slotNu[k].length; i++) {
-                rate[slotSpecies[k][i]] += slotNu[k][i] * xi / volumeM3;
+                into[slotSpecies[k][i]] += slotNu[k][i] * xi / volume;
             }
             if (s.depositMetalIndex() >= 0 && k < nc) {
                 yDot[layout.deposit0 + s.depositMetalIndex()] += xi;
@@ -190,37 +225,68 @@ public final class CellRates implements FirstOrderDifferentialEquations {
                 yDot[layout.gas0 + slotGas[k]] += slotGasNu[k] * xi;
             }
         }
-        if (net.dissolvedChlorineIndex >= 0) {
-            int j = net.dissolvedChlorineIndex;
-            double degas = CHLORINE_DEGASSING_PER_S * op.c[j];
-            rate[j] -= degas;
-            yDot[layout.gas0 + 2] += degas * volumeM3;
+        for (int m = 0; m < layout.metals; m++) {
+            yDot[layout.corroded0 + m] = Math.max(0, -yDot[layout.deposit0 + m]);
         }
-        for (ReactionNetwork.PreparedHomogeneous h : net.homogeneous) {
-            double r = h.reaction().rateConstant();
-            for (int i = 0; i < h.index().length; i++) {
-                if (h.order()[i] > 0) {
-                    r *= Math.pow(op.c[h.index()[i]], h.order()[i]);
-                }
-            }
-            for (int i = 0; i < h.index().length; i++) {
-                rate[h.index()[i]] += h.nu()[i] * r;
+        bulk(op.c, rate, catholyteM3, yDot);
+        if (layout.twoCompartments) {
+            bulk(op.cA, rateA, anolyteM3, yDot);
+            // once shorted, the current passes through the dendrite, not through the solution
+            op.compartments.fluxes(op.c, op.cA, op.shorted ? 0 : op.currentA, op.diffusionFactor, flux);
+            for (int j = 0; j < flux.length; j++) {
+                rate[j] += flux[j] / catholyteM3;
+                rateA[j] -= flux[j] / anolyteM3;
             }
         }
-        for (int j = 0; j < rate.length; j++) {
-            yDot[j] = rate[j];
-        }
-        if (net.waterEquilibrium()) {
-            yDot[net.hIndex] = rate[net.hIndex] - rate[net.ohIndex];
-            yDot[net.ohIndex] = 0;
-            yDot[layout.protonTurnover] = (rate[net.hIndex] + rate[net.ohIndex]) * volumeM3;
+        copyBlock(rate, 0, catholyteM3, yDot);
+        if (layout.twoCompartments) {
+            copyBlock(rateA, layout.anolyte0, anolyteM3, yDot);
         }
         double loss = heatLossWPerK * (op.tempK - ambientK);
         yDot[layout.temperature] = (heat - loss) / (HEAT_CAPACITY_J_PER_M3K * volumeM3);
         yDot[layout.charge] = op.currentA;
         yDot[layout.energy] = op.currentA * op.cellVoltageV;
         yDot[layout.voltageTime] = op.cellVoltageV;
-        yDot[layout.dendrite] = 0;
+        yDot[layout.dendrite] = dendrite.rate(op) / op.dendriteM;
+        yDot[layout.shortCharge] = op.shorted ? op.currentA : 0;
+    }
+
+    /** Degassing of dissolved chlorine and the homogeneous reactions of one compartment. */
+    private void bulk(double[] c, double[] into, double volume, double[] yDot) {
+        if (net.dissolvedChlorineIndex >= 0) {
+            int j = net.dissolvedChlorineIndex;
+            double degas = CHLORINE_DEGASSING_PER_S * c[j];
+            into[j] -= degas;
+            yDot[layout.gas0 + 2] += degas * volume;
+        }
+        for (ReactionNetwork.PreparedHomogeneous h : net.homogeneous) {
+            double r = h.reaction().rateConstant();
+            for (int i = 0; i < h.index().length; i++) {
+                if (h.order()[i] > 0) {
+                    r *= Math.pow(c[h.index()[i]], h.order()[i]);
+                }
+            }
+            for (int i = 0; i < h.index().length; i++) {
+                into[h.index()[i]] += h.nu()[i] * r;
+            }
+        }
+    }
+
+    /** Rates of one compartment into the state, with the net acidity and the proton turnover. */
+    private void copyBlock(double[] r, int offset, double volume, double[] yDot) {
+        for (int j = 0; j < r.length; j++) {
+            yDot[offset + j] = r[j];
+        }
+        if (net.waterEquilibrium()) {
+            yDot[offset + net.hIndex] = r[net.hIndex] - r[net.ohIndex];
+            yDot[offset + net.ohIndex] = 0;
+            yDot[layout.protonTurnover] += (r[net.hIndex] + r[net.ohIndex]) * volume;
+        }
+    }
+
+    /** @return the dendrite model of this run */
+    DendriteGrowth dendrite() {
+        return dendrite;
     }
 
     /**
@@ -250,13 +316,18 @@ public final class CellRates implements FirstOrderDifferentialEquations {
         double limitRatio = 0;
         if (net.targetSlot >= 0 && op.currentA > 0) {
             eff = Math.max(0, -cath[net.targetSlot] / op.currentA);
-            limitRatio = Math.max(0, -op.cathodeI[net.targetSlot] * op.cathode.invIlC[net.targetSlot]);
+            limitRatio = op.targetLimitRatio();
         }
         double amps = op.currentA;
+        String form = null;
+        if (net.targetSlot >= 0 && cath[net.targetSlot] < 0) {
+            form = Morphology.classify(limitRatio, net.targetMetal().depositClass(), additives).key();
+        }
         return new InstantState(t, amps, op.cellVoltageV, op.cathodeE, op.anodeE, eqA - eqC, op.anodeE - eqA,
                 op.cathodeE - eqC, amps * op.rGapNoGas, amps * (op.rGap - op.rGapNoGas), amps * op.contactOhm,
                 cath, an, op.c.clone(), op.tempK, op.kappa, op.voidFraction, eff, limitRatio, op.limited,
-                op.dendriteM);
+                DendriteGrowth.tipHeightM(op), layout.twoCompartments ? op.cA.clone() : null, form, op.shorted,
+                op.thicknessM);
     }
 
     private static int dominant(double[] amps, int sign) {

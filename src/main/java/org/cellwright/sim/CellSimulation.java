@@ -89,7 +89,8 @@ public final class CellSimulation {
         CellRates rates = new CellRates(sc, net);
         StateLayout layout = rates.layout();
         CountingEquations counted = new CountingEquations(rates, absoluteTolerances(sc, rates.layout()),
-                new ConservedQuantities(net, rates.layout(), sc.electrolyte().volumeM3()));
+                new ConservedQuantities(net, rates.layout(), rates.operatingPoint().compartments.catholyteM3(),
+                        rates.operatingPoint().compartments.anolyteM3()));
         double duration = sc.run().durationS();
         double[] absTol = absoluteTolerances(sc, layout);
         FirstOrderIntegrator integrator = integrators.create(rates, absTol, REL_TOL,
@@ -132,10 +133,29 @@ public final class CellSimulation {
         events.sort(java.util.Comparator.comparingDouble(RunEvent::timeS));
         RunSummary summary = new SummaryBuilder(sc, net, layout, trace, y, t)
                 .stopReason(stopAtStart != null ? stopAtStart : detectors.stopReason())
+                .shortCircuit(detectors.shortTimeS(), shortForecast(rates, sc, t, y, detectors.shortTimeS()))
                 .build();
         RunLayout names = RunLayout.of(net);
         return new RunResult(sc, names.speciesNames(), names.metalSymbols(), names.cathodeReactions(),
                 names.anodeReactions(), List.copyOf(trace), List.copyOf(events), summary, y.clone(), counted.count);
+    }
+
+    /**
+     * Longest forecast of a short reported (s): 30 days. Beyond it a forecast at frozen conditions says
+     * nothing a user can act on.
+     */
+    static final double FORECAST_HORIZON_S = 30 * 86400.0;
+
+    /** @return when a dendrite would short the cell if the end conditions held (s from the start), or null */
+    private static Double shortForecast(CellRates rates, Scenario sc, double t, double[] y, Double shortS) {
+        if (shortS != null || !rates.dendrite().active()) {
+            return null;
+        }
+        OperatingPoint op = rates.operatingPoint();
+        op.unpack(t, y);
+        op.solve(t);
+        double dt = rates.dendrite().timeToShortS(op);
+        return Double.isFinite(dt) && dt <= FORECAST_HORIZON_S ? t + dt : null;
     }
 
     /** Schedule times at which the set value steps, then the end. */
@@ -157,15 +177,19 @@ public final class CellSimulation {
                 .max().orElse(1.0);
         java.util.Arrays.fill(abs, 0, layout.species, Math.max(maxC, 1.0) * 1e-8);
         abs[layout.temperature] = 1e-6;
+        if (layout.twoCompartments) {
+            java.util.Arrays.fill(abs, layout.anolyte0, layout.anolyte0 + layout.species, Math.max(maxC, 1.0) * 1e-8);
+        }
         double molesScale = Math.max(maxC, 1.0) * sc.electrolyte().volumeM3();
-        for (int i = layout.deposit0; i < layout.size; i++) {
+        for (int i = layout.deposit0; i < layout.reactionCharge0; i++) {
             abs[i] = molesScale * 1e-9;
         }
         abs[layout.charge] = 1e-6;
         abs[layout.energy] = 1e-6;
         abs[layout.voltageTime] = 1e-6;
-        abs[layout.dendrite] = 1e-12;
-        for (int i = layout.reactionCharge0; i < layout.size; i++) {
+        abs[layout.dendrite] = 1e-6;
+        abs[layout.shortCharge] = 1e-6;
+        for (int i = layout.reactionCharge0; i < layout.reactionCharge0 + layout.slots; i++) {
             abs[i] = 1e-6;
         }
         return abs;

@@ -8,8 +8,9 @@ import java.util.Map;
 import org.cellwright.chem.Species;
 
 /**
- * The linear invariants of the rates: the atoms of each element (bath, deposits, gases, less the soluble
- * anode's metal) and the charge balance of each electrode (partial charges add up to the charge passed).
+ * The linear invariants of the rates: the atoms of each element (bath, or catholyte and anolyte, deposits,
+ * gases, less the soluble anode's metal) and the charge balance of each electrode (partial charges add up to
+ * the charge passed, less what passed through a short).
  *
  * <p>The rates conserve each exactly ({@code w . f = 0}), and a Rosenbrock method keeps a linear invariant
  * if its Jacobian does too ({@code w . J = 0}). A Jacobian formed by differences carries round-off divided by
@@ -23,13 +24,17 @@ final class ConservedQuantities {
 
     private final double[][] basis;
 
-    ConservedQuantities(ReactionNetwork net, StateLayout layout, double volumeM3) {
+    ConservedQuantities(ReactionNetwork net, StateLayout layout, double catholyteM3, double anolyteM3) {
         List<double[]> vectors = new ArrayList<>();
         Map<String, double[]> elements = new LinkedHashMap<>();
         List<Species> species = net.species();
         for (int j = 0; j < species.size(); j++) {
             for (var e : species.get(j).elements().entrySet()) {
-                elements.computeIfAbsent(e.getKey(), k -> new double[layout.size])[j] += e.getValue() * volumeM3;
+                double[] w = elements.computeIfAbsent(e.getKey(), k -> new double[layout.size]);
+                w[j] += e.getValue() * catholyteM3;
+                if (layout.twoCompartments) {
+                    w[layout.anolyte0 + j] += e.getValue() * anolyteM3;
+                }
             }
         }
         for (int m = 0; m < layout.metals; m++) {
@@ -54,6 +59,8 @@ final class ConservedQuantities {
         double[] anode = new double[layout.size];
         cathode[layout.charge] = 1;
         anode[layout.charge] = -1;
+        cathode[layout.shortCharge] = -1;
+        anode[layout.shortCharge] = 1;
         for (int k = 0; k < layout.slots; k++) {
             (k < nc ? cathode : anode)[layout.reactionCharge0 + k] = 1;
         }

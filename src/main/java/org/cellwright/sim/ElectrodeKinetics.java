@@ -13,13 +13,21 @@ import org.cellwright.chem.PhysicalConstants;
  * <pre>
  *   i_a = i0 exp( alpha_a F eta / RT),  i_c = i0 exp(-alpha_c F eta / RT)
  *   i0  = i0_ref a_O^(1-beta) a_R^beta,  beta = alpha_c / (alpha_a + alpha_c)
- *   i   = (i_a - i_c) / (1 + i_a / iL_a + i_c / iL_c),  iL = n F km c / nu
+ *   i   = (i_a' - i_c') / (1 + i_a' / iL_a + i_c' / iL_c),  i_a' = i_a / (1 + X_R),  i_c' = i_c / (1 + X_O)
  * </pre>
- * (Bard &amp; Faulkner, <i>Electrochemical Methods</i>, 2nd ed., eqs. 3.4.10 and 1.4.x, first-order kinetics
- * with a linear diffusion layer). Exponentials are formed in log space so that no depleted species gives
- * NaN; a missing direction (gas or solid absent) has a zero branch. On the cathode, kinetics are a mix of
- * the substrate's and the deposit's by the fraction of the surface the deposit covers. Anodic current
- * densities are positive.
+ * with {@code iL = n F km c / nu} of the limiting dissolved species on each side, and {@code X_j} the share of
+ * species j's mass-transfer flux that the other reactions' branches draw ({@code sum of i_branch / iL}). For
+ * one reaction ({@code X = 0}) this is {@code (i_a - i_c) / (1 + i_a / iL_a + i_c / iL_c)} (Bard &amp;
+ * Faulkner, <i>Electrochemical Methods</i>, 2nd ed., eqs. 3.4.10 and 1.4.x, first-order kinetics with a linear
+ * diffusion layer). When several branches draw on the same species (Cu2+ to Cu and to Cu+; Cu+ made by one
+ * and taken by the next) they share its one flux to the electrode: the expression is the exact solution of
+ * the surface balances of O and R when the other consumers are first order in them, so the flux is never
+ * counted twice and their total never exceeds {@code km c}. Exponentials are formed in log space so that no depleted species gives NaN; a missing
+ * direction (gas or solid absent) has a zero branch. On the cathode, kinetics are a mix of the substrate's
+ * and the deposit's by the fraction of the surface the deposit covers, and each deposited metal may
+ * dissolve again from the share of the surface it covers (mixed-potential corrosion, Wagner &amp; Traud,
+ * Z. Elektrochem. 44 (1938) 391): an oxidant whose reduction current exceeds the applied current takes its
+ * electrons from the deposit. Anodic current densities are positive.
  *
  * <p>Not thread-safe: one instance per running simulation.
  */
@@ -46,10 +54,21 @@ final class ElectrodeKinetics {
     final double[] invIlA;
     final double[] invIlC;
     final double[] eEq;
+    /** Limiting dissolved species of each side of each reaction (state index), or -1. */
+    private final int[] limitOx;
+    private final int[] limitRed;
+    private final double[] ia;
+    private final double[] ic;
+    private final double[] dia;
+    private final double[] dic;
+    private final double[] cur;
+    private final double[] cathodic;
+    private final double[] dcur;
+    private final double[] share;
+    private final double[] dShare;
     private double f;
     private double hint;
     private final double[] scratch = new double[1];
-    private final double[] derivative = new double[1];
 
     ElectrodeKinetics(List<ReactionSlot> slots, double initialGuessV) {
         this.slots = slots;
@@ -66,6 +85,26 @@ final class ElectrodeKinetics {
         invIlA = new double[count];
         invIlC = new double[count];
         eEq = new double[count];
+        limitOx = new int[count];
+        limitRed = new int[count];
+        ia = new double[count];
+        ic = new double[count];
+        dia = new double[count];
+        dic = new double[count];
+        cur = new double[count];
+        cathodic = new double[count];
+        dcur = new double[count];
+        int species = 0;
+        for (ReactionSlot s : slots) {
+            for (int j : s.oxIndex()) {
+                species = Math.max(species, j + 1);
+            }
+            for (int j : s.redIndex()) {
+                species = Math.max(species, j + 1);
+            }
+        }
+        share = new double[species];
+        dShare = new double[species];
         hint = initialGuessV;
     }
 
@@ -83,8 +122,10 @@ final class ElectrodeKinetics {
      * @param km mass-transfer coefficient of each species (m/s)
      * @param tempK temperature (K)
      * @param coverage fraction of the surface covered by the deposit (0..1), cathode only
+     * @param metalShare for each deposited metal, the fraction of the surface it covers (0..1), from which
+     *     it may dissolve again; null at the anode
      */
-    void prepare(double[] c, double[] free, double[] km, double tempK, double coverage) {
+    void prepare(double[] c, double[] free, double[] km, double tempK, double coverage, double[] metalShare) {
         f = PhysicalConstants.FARADAY / (PhysicalConstants.GAS_CONSTANT * tempK);
         for (int k = 0; k < count; k++) {
             ReactionSlot s = slots.get(k);
@@ -93,15 +134,25 @@ final class ElectrodeKinetics {
             double nF = s.n() * PhysicalConstants.FARADAY;
             double ilC = Double.POSITIVE_INFINITY;
             double ilA = Double.POSITIVE_INFINITY;
+            limitOx[k] = -1;
+            limitRed[k] = -1;
             for (int j = 0; j < s.oxIndex().length; j++) {
                 int idx = s.oxIndex()[j];
                 lnAo += s.oxNu()[j] * Math.log(Math.max(free[idx] * 1e-3, MIN_ACTIVITY));
-                ilC = Math.min(ilC, nF * km[idx] * Math.max(c[idx], MIN_CONCENTRATION) / s.oxNu()[j]);
+                double il = nF * km[idx] * Math.max(c[idx], MIN_CONCENTRATION) / s.oxNu()[j];
+                if (il < ilC) {
+                    ilC = il;
+                    limitOx[k] = idx;
+                }
             }
             for (int j = 0; j < s.redIndex().length; j++) {
                 int idx = s.redIndex()[j];
                 lnAr += s.redNu()[j] * Math.log(Math.max(free[idx] * 1e-3, MIN_ACTIVITY));
-                ilA = Math.min(ilA, nF * km[idx] * Math.max(c[idx], MIN_CONCENTRATION) / s.redNu()[j]);
+                double il = nF * km[idx] * Math.max(c[idx], MIN_CONCENTRATION) / s.redNu()[j];
+                if (il < ilA) {
+                    ilA = il;
+                    limitRed[k] = idx;
+                }
             }
             double e = s.reaction().e0At(tempK) + (lnAo - lnAr) / (s.n() * f);
             eEq[k] = e;
@@ -110,24 +161,24 @@ final class ElectrodeKinetics {
             Kinetics k1 = s.substrateKinetics();
             Kinetics k2 = s.depositKinetics();
             double theta = (k2 == null || k2.equals(k1)) ? 0 : coverage;
-            setBranch(k, k1, lnAo, lnAr, e, 1 - theta, true, s);
+            boolean redissolves = metalShare != null && s.depositMetalIndex() >= 0;
+            double anodicShare = redissolves ? metalShare[s.depositMetalIndex()] : 1;
+            setBranch(k, k1, lnAo, lnAr, e, (1 - theta) * anodicShare, 1 - theta, true, s, redissolves);
             w2[k] = theta;
             if (theta > 0) {
-                setBranch(k, k2, lnAo, lnAr, e, theta, false, s);
+                setBranch(k, k2, lnAo, lnAr, e, theta * anodicShare, theta, false, s, redissolves);
             }
         }
     }
 
-    private void setBranch(int k, Kinetics kin, double lnAo, double lnAr, double e, double weight, boolean first,
-                           ReactionSlot s) {
+    private void setBranch(int k, Kinetics kin, double lnAo, double lnAr, double e, double anodicWeight,
+                           double cathodicWeight, boolean first, ReactionSlot s, boolean redissolves) {
         double beta = kin.alphaC() / (kin.alphaA() + kin.alphaC());
-        double lnI0 = Math.log(kin.i0APerM2()) + (1 - beta) * lnAo + beta * lnAr + Math.log(Math.max(weight, 1e-300));
-        double lnKa = s.anodicAllowed() ? lnI0 - kin.alphaA() * f * e : Double.NEGATIVE_INFINITY;
-        double lnKc = s.cathodicAllowed() ? lnI0 + kin.alphaC() * f * e : Double.NEGATIVE_INFINITY;
-        if (weight <= 0) {
-            lnKa = Double.NEGATIVE_INFINITY;
-            lnKc = Double.NEGATIVE_INFINITY;
-        }
+        double lnI0 = Math.log(kin.i0APerM2()) + (1 - beta) * lnAo + beta * lnAr;
+        double lnKa = (s.anodicAllowed() || redissolves) && anodicWeight > 0
+                ? lnI0 + Math.log(anodicWeight) - kin.alphaA() * f * e : Double.NEGATIVE_INFINITY;
+        double lnKc = s.cathodicAllowed() && cathodicWeight > 0
+                ? lnI0 + Math.log(cathodicWeight) + kin.alphaC() * f * e : Double.NEGATIVE_INFINITY;
         if (first) {
             lnKa1[k] = lnKa;
             lnKc1[k] = lnKc;
@@ -149,6 +200,75 @@ final class ElectrodeKinetics {
     }
 
     /**
+     * Evaluates every reaction at potential {@code e}: the kinetic branches, the shares of each species'
+     * flux, the currents and (when asked) their derivatives.
+     */
+    private void evaluate(double e, boolean derivatives) {
+        java.util.Arrays.fill(share, 0);
+        if (derivatives) {
+            java.util.Arrays.fill(dShare, 0);
+        }
+        for (int k = 0; k < count; k++) {
+            double a1 = branch(lnKa1[k], aA1[k], e);
+            double c1 = branch(lnKc1[k], -aC1[k], e);
+            double a = a1;
+            double cc = c1;
+            double da = aA1[k] * a1;
+            double dc = -aC1[k] * c1;
+            if (w2[k] > 0) {
+                double a2 = branch(lnKa2[k], aA2[k], e);
+                double c2 = branch(lnKc2[k], -aC2[k], e);
+                a += a2;
+                cc += c2;
+                da += aA2[k] * a2;
+                dc += -aC2[k] * c2;
+            }
+            ia[k] = a;
+            ic[k] = cc;
+            dia[k] = da;
+            dic[k] = dc;
+            if (limitOx[k] >= 0) {
+                share[limitOx[k]] += cc * invIlC[k];
+                if (derivatives) {
+                    dShare[limitOx[k]] += dc * invIlC[k];
+                }
+            }
+            if (limitRed[k] >= 0) {
+                share[limitRed[k]] += a * invIlA[k];
+                if (derivatives) {
+                    dShare[limitRed[k]] += da * invIlA[k];
+                }
+            }
+        }
+        for (int k = 0; k < count; k++) {
+            double xo = 0;
+            double dxo = 0;
+            double xr = 0;
+            double dxr = 0;
+            if (limitOx[k] >= 0) {
+                xo = Math.max(share[limitOx[k]] - ic[k] * invIlC[k], 0);
+                dxo = derivatives ? dShare[limitOx[k]] - dic[k] * invIlC[k] : 0;
+            }
+            if (limitRed[k] >= 0) {
+                xr = Math.max(share[limitRed[k]] - ia[k] * invIlA[k], 0);
+                dxr = derivatives ? dShare[limitRed[k]] - dia[k] * invIlA[k] : 0;
+            }
+            double a = ia[k] / (1 + xr);
+            double c = ic[k] / (1 + xo);
+            double den = 1 + a * invIlA[k] + c * invIlC[k];
+            double num = a - c;
+            cur[k] = num / den;
+            cathodic[k] = c / den;
+            if (derivatives) {
+                double da = (dia[k] * (1 + xr) - ia[k] * dxr) / ((1 + xr) * (1 + xr));
+                double dc = (dic[k] * (1 + xo) - ic[k] * dxo) / ((1 + xo) * (1 + xo));
+                double dDen = da * invIlA[k] + dc * invIlC[k];
+                dcur[k] = ((da - dc) * den - num * dDen) / (den * den);
+            }
+        }
+    }
+
+    /**
      * Current density of one reaction (A/m2, anodic positive) at potential {@code e}, and its derivative.
      *
      * @param k reaction index
@@ -157,26 +277,11 @@ final class ElectrodeKinetics {
      * @return the current density (A/m2)
      */
     double current(int k, double e, double[] deriv) {
-        double ia = branch(lnKa1[k], aA1[k], e);
-        double ic = branch(lnKc1[k], -aC1[k], e);
-        double dia = aA1[k] * ia;
-        double dic = -aC1[k] * ic;
-        if (w2[k] > 0) {
-            double ia2 = branch(lnKa2[k], aA2[k], e);
-            double ic2 = branch(lnKc2[k], -aC2[k], e);
-            ia += ia2;
-            ic += ic2;
-            dia += aA2[k] * ia2;
-            dic += -aC2[k] * ic2;
-        }
-        double den = 1 + ia * invIlA[k] + ic * invIlC[k];
-        double num = ia - ic;
+        evaluate(e, deriv != null);
         if (deriv != null) {
-            double dNum = dia - dic;
-            double dDen = dia * invIlA[k] + dic * invIlC[k];
-            deriv[0] = (dNum * den - num * dDen) / (den * den);
+            deriv[0] = dcur[k];
         }
-        return num / den;
+        return cur[k];
     }
 
     /**
@@ -233,14 +338,12 @@ final class ElectrodeKinetics {
 
     /** @return the sum of the reaction current densities at {@code e} (A/m2), derivative in {@code d[0]} */
     double total(double e, double[] d) {
+        evaluate(e, d != null);
         double sum = 0;
         double dsum = 0;
-        double[] dk = d == null ? null : derivative;
         for (int k = 0; k < count; k++) {
-            sum += current(k, e, dk);
-            if (dk != null) {
-                dsum += dk[0];
-            }
+            sum += cur[k];
+            dsum += dcur[k];
         }
         if (d != null) {
             d[0] = dsum;
@@ -250,8 +353,33 @@ final class ElectrodeKinetics {
 
     /** Fills {@code out} with each reaction's current density at {@code e} (A/m2). */
     void currents(double e, double[] out) {
-        for (int k = 0; k < count; k++) {
-            out[k] = current(k, e, null);
-        }
+        evaluate(e, false);
+        System.arraycopy(cur, 0, out, 0, count);
+    }
+
+    /**
+     * The cathodic kinetic current density of reaction {@code k} at the potential of the last
+     * {@link #currents} call: its cathodic branch with no mass-transfer loss (A/m2, positive).
+     */
+    double lastCathodicKinetic(int k) {
+        return ic[k];
+    }
+
+    /**
+     * The cathodic part of reaction {@code k}'s current density at the potential of the last {@link #currents}
+     * call (A/m2, positive): the reduction alone, without the reverse reaction. Over its limiting current it is
+     * how close the reduction runs to its mass-transfer limit, a ratio that stays continuous when the net
+     * current changes sign (a deposit redissolving in a bath that has lost the metal's ion).
+     */
+    double lastCathodicCurrent(int k) {
+        return cathodic[k];
+    }
+
+    /**
+     * The surface over bulk concentration of reaction {@code k}'s limiting oxidised species at the potential
+     * of the last {@link #currents} call, {@code 1 / (1 + S_O)} (1 when it has none).
+     */
+    double lastSurfaceRatioOx(int k) {
+        return limitOx[k] < 0 ? 1 : 1 / (1 + share[limitOx[k]]);
     }
 }

@@ -23,9 +23,16 @@ package org.cellwright.sim;
  * @param conductivitySPerM bath conductivity without gas (S/m)
  * @param voidFraction gas fraction in the gap
  * @param targetEfficiency the share of the current that deposits the target metal (0..1)
- * @param targetLimitRatio the target metal's partial current over its limiting current (0..1)
+ * @param targetLimitRatio the target metal's deposition (cathodic) current over its limiting current (0..1)
  * @param supplyLimited true when the supply holds its limit instead of its set value
- * @param dendriteHeightM dendrite tip height above the cathode (m)
+ * @param dendriteHeightM height of the dendrite tip above the cathode's starting surface (m): the flat deposit's
+ *     thickness plus the dendrite standing on it
+ * @param anolyteConcentrationsMolPerM3 concentration of each tracked species in the anolyte (mol/m3), or null
+ *     when the cell is undivided ({@code concentrationsMolPerM3} is then the whole bath, else the catholyte)
+ * @param morphology the form of the target metal's deposit now ("compact", "rough", "dendritic", "powdery"),
+ *     or null when it is not depositing
+ * @param shorted true once a dendrite has bridged the gap
+ * @param depositThicknessM mean thickness of the flat deposit (m)
  */
 public record InstantState(double timeS, double currentA, double cellVoltageV, double cathodePotentialV,
                            double anodePotentialV, double equilibriumVoltageV, double anodeOverpotentialV,
@@ -33,7 +40,23 @@ public record InstantState(double timeS, double currentA, double cellVoltageV, d
                            double ohmicContactsV, double[] cathodeCurrentsA, double[] anodeCurrentsA,
                            double[] concentrationsMolPerM3, double temperatureK, double conductivitySPerM,
                            double voidFraction, double targetEfficiency, double targetLimitRatio,
-                           boolean supplyLimited, double dendriteHeightM) {
+                           boolean supplyLimited, double dendriteHeightM, double[] anolyteConcentrationsMolPerM3,
+                           String morphology, boolean shorted, double depositThicknessM) {
+
+    /** An instant of an undivided cell with no deposit form recorded, the tip at {@code dendriteHeightM}. */
+    public InstantState(double timeS, double currentA, double cellVoltageV, double cathodePotentialV,
+                        double anodePotentialV, double equilibriumVoltageV, double anodeOverpotentialV,
+                        double cathodeOverpotentialV, double ohmicSolutionV, double ohmicBubblesV,
+                        double ohmicContactsV, double[] cathodeCurrentsA, double[] anodeCurrentsA,
+                        double[] concentrationsMolPerM3, double temperatureK, double conductivitySPerM,
+                        double voidFraction, double targetEfficiency, double targetLimitRatio,
+                        boolean supplyLimited, double dendriteHeightM) {
+        this(timeS, currentA, cellVoltageV, cathodePotentialV, anodePotentialV, equilibriumVoltageV,
+                anodeOverpotentialV, cathodeOverpotentialV, ohmicSolutionV, ohmicBubblesV, ohmicContactsV,
+                cathodeCurrentsA, anodeCurrentsA, concentrationsMolPerM3, temperatureK, conductivitySPerM,
+                voidFraction, targetEfficiency, targetLimitRatio, supplyLimited, dendriteHeightM, null, null, false,
+                0);
+    }
 
     /** @return the total ohmic drop (V) */
     public double ohmicDropV() {

@@ -21,7 +21,11 @@ import org.cellwright.chem.PhysicalConstants;
  * of bubbles and w the electrode width (square electrodes). A bench supply in current control holds its
  * set current unless the cell would need more than its voltage limit; then the current solves
  * {@code U(I) = U_limit} (U rises monotonically with I). In voltage control the current solves
- * {@code U(I) = U_set}, capped by the current limit.
+ * {@code U(I) = U_set}, capped by the current limit. In a two-compartment cell the cathode works in the
+ * catholyte and the anode in the anolyte; the solution path is split evenly between them and the separator
+ * adds its own resistance ({@link CompartmentExchange}). Once a dendrite has bridged the gap the cell is a
+ * resistor: {@code U = I (R_short + R_contacts)}, no electrode reaction runs, and both electrodes stay at the
+ * cathode's potential at the moment of the short.
  *
  * <p>Mutable workspace, one per running simulation.
  */
@@ -63,10 +67,16 @@ final class OperatingPoint {
     private final double electrodeWidthM;
     private final double[] gasPerCharge;
 
+    final CompartmentExchange compartments;
+    final double shortOhm;
     final double[] c;
+    final double[] cA;
     /** Concentrations that set activities (mol/m3): as {@link #c}, with H+ free of bisulfate. */
     final double[] free;
+    /** The anolyte's, as {@link #free} (the same array when the cell is undivided). */
+    final double[] freeA;
     final double[] km;
+    final double[] metalShare;
     final double[] cathodeI;
     final double[] anodeI;
     double tempK;
@@ -81,6 +91,13 @@ final class OperatingPoint {
     boolean limited;
     double coverage;
     double dendriteM;
+    double thicknessM;
+    double kappaA;
+    double waldenFactor;
+    double diffusionFactor;
+    boolean shorted;
+    private double shortAtS = Double.POSITIVE_INFINITY;
+    private double shortPotentialV;
 
     OperatingPoint(Scenario sc, ReactionNetwork net, StateLayout layout) {
         this.net = net;
@@ -97,10 +114,16 @@ final class OperatingPoint {
                 sc.electrolyte().temperatureK());
         this.cathode = new ElectrodeKinetics(net.cathodeSlots, -0.2);
         this.anode = new ElectrodeKinetics(net.anodeSlots, 1.0);
+        this.compartments = new CompartmentExchange(sc.cell().compartments(), net.species(),
+                sc.electrolyte().volumeM3(), ohmicAreaM2);
+        this.shortOhm = sc.deposit().shortResistanceOhm();
         int n = net.species().size();
         c = new double[n];
+        cA = compartments.twoCompartments() ? new double[n] : c;
         free = new double[n];
+        freeA = compartments.twoCompartments() ? new double[n] : free;
         km = new double[n];
+        metalShare = new double[net.depositMetals().size()];
         cathodeI = new double[net.cathodeSlots.size()];
         anodeI = new double[net.anodeSlots.size()];
         gasPerCharge = new double[cathodeI.length + anodeI.length];
@@ -121,39 +144,91 @@ final class OperatingPoint {
 
     /** Unpacks the state into concentrations, temperature and mass-transfer coefficients. */
     void unpack(double t, double[] y) {
-        for (int j = 0; j < c.length; j++) {
-            c[j] = Math.max(y[j], 0);
-        }
-        if (net.waterEquilibrium()) {
-            double h = y[net.hIndex];
-            double hPlus = h >= 0 ? 0.5 * (h + Math.sqrt(h * h + 4 * WATER_ION_PRODUCT))
-                    : 2 * WATER_ION_PRODUCT / (-h + Math.sqrt(h * h + 4 * WATER_ION_PRODUCT));
-            c[net.hIndex] = hPlus;
-            c[net.ohIndex] = WATER_ION_PRODUCT / hPlus;
+        shorted = t >= shortAtS;
+        unpackBlock(y, 0, c);
+        if (compartments.twoCompartments()) {
+            unpackBlock(y, layout.anolyte0, cA);
         }
         tempK = Math.min(Math.max(y[layout.temperature], PHYSICS_MIN_K), PHYSICS_MAX_K);
         double tEff = Math.max(t, FIRST_LAYER_S);
-        double dFactor = props.diffusionFactor(tempK);
+        diffusionFactor = props.diffusionFactor(tempK);
+        waldenFactor = diffusionFactor * PhysicalConstants.REFERENCE_TEMPERATURE_K / tempK;
         for (int j = 0; j < c.length; j++) {
-            double d = net.species().get(j).diffusionM2PerS() * dFactor;
+            double d = net.species().get(j).diffusionM2PerS() * diffusionFactor;
             double delta = Math.min(steadyLayerM, 2 * Math.sqrt(d * tEff / Math.PI));
             km[j] = d / delta;
         }
         double thickness = 0;
+        double moles = 0;
         List<Metal> metals = net.depositMetals();
         for (int m = 0; m < metals.size(); m++) {
-            thickness += Math.max(y[layout.deposit0 + m], 0) * metals.get(m).molarVolumeM3PerMol();
+            double n = Math.max(y[layout.deposit0 + m], 0);
+            thickness += n * metals.get(m).molarVolumeM3PerMol();
+            moles += n;
         }
         thickness /= cathodeAreaM2;
+        thicknessM = thickness;
         coverage = 1 - Math.exp(-thickness / COVERAGE_THICKNESS_M);
-        dendriteM = y[layout.dendrite];
-        kappa = props.conductivity(c, tempK);
-        System.arraycopy(c, 0, free, 0, c.length);
-        if (net.hIndex >= 0) {
-            free[net.hIndex] = props.freeConcentration(net.hIndex, c[net.hIndex]);
+        for (int m = 0; m < metals.size(); m++) {
+            metalShare[m] = moles > 0 ? coverage * Math.max(y[layout.deposit0 + m], 0) / moles : 0;
         }
-        cathode.prepare(c, free, km, tempK, coverage);
-        anode.prepare(c, free, km, tempK, 0);
+        dendriteM = Math.exp(y[layout.dendrite]);
+        kappa = props.conductivity(c, tempK);
+        freeOf(c, free);
+        if (compartments.twoCompartments()) {
+            kappaA = props.conductivity(cA, tempK);
+            freeOf(cA, freeA);
+        } else {
+            kappaA = kappa;
+        }
+        cathode.prepare(c, free, km, tempK, coverage, metalShare);
+        anode.prepare(cA, freeA, km, tempK, 0, null);
+    }
+
+    /** The concentrations that set activities, after the speciation of the last conductivity call. */
+    private void freeOf(double[] total, double[] out) {
+        System.arraycopy(total, 0, out, 0, total.length);
+        if (net.hIndex >= 0) {
+            out[net.hIndex] = props.freeConcentration(net.hIndex, total[net.hIndex]);
+        }
+    }
+
+    /** Concentrations of one compartment's block, with H+ and OH- recovered from the net acidity. */
+    private void unpackBlock(double[] y, int offset, double[] out) {
+        for (int j = 0; j < out.length; j++) {
+            out[j] = Math.max(y[offset + j], 0);
+        }
+        if (net.waterEquilibrium()) {
+            double h = y[offset + net.hIndex];
+            double hPlus = h >= 0 ? 0.5 * (h + Math.sqrt(h * h + 4 * WATER_ION_PRODUCT))
+                    : 2 * WATER_ION_PRODUCT / (-h + Math.sqrt(h * h + 4 * WATER_ION_PRODUCT));
+            out[net.hIndex] = hPlus;
+            out[net.ohIndex] = WATER_ION_PRODUCT / hPlus;
+        }
+    }
+
+    /**
+     * From time {@code t} on the cell is shorted by a dendrite: it conducts as a resistor and no electrode
+     * reaction runs. Both electrodes are left at the cathode's potential at that moment (the last one solved).
+     * Earlier times (the output sampled within the step that ended at the short) still see the open cell.
+     */
+    void shortCircuit(double t) {
+        shortPotentialV = cathodeE;
+        shortAtS = t;
+        shorted = true;
+    }
+
+    /**
+     * How close the target metal's deposition runs to its limiting current at the operating point last solved:
+     * its cathodic current over its limiting current (0 while shorted, or without a target). The cathodic part
+     * alone keeps the ratio continuous where the net current changes sign.
+     */
+    double targetLimitRatio() {
+        int k = net.targetSlot;
+        if (k < 0 || shorted) {
+            return 0;
+        }
+        return cathode.lastCathodicCurrent(k) * cathode.invIlC[k];
     }
 
     /** End of the integration segment under way (s): at its end the set value is the left limit. */
@@ -200,6 +275,17 @@ final class OperatingPoint {
      */
     double cellAt(double amps) {
         currentA = amps;
+        if (shorted) {
+            java.util.Arrays.fill(cathodeI, 0);
+            java.util.Arrays.fill(anodeI, 0);
+            cathodeE = shortPotentialV;
+            anodeE = shortPotentialV;
+            voidFraction = 0;
+            rGapNoGas = shortOhm;
+            rGap = shortOhm;
+            cellVoltageV = amps * (shortOhm + contactOhm);
+            return cellVoltageV;
+        }
         cathodeE = cathode.potentialFor(-amps / cathodeAreaM2);
         anodeE = anode.potentialFor(amps / anodeAreaM2);
         cathode.currents(cathodeE, cathodeI);
@@ -214,8 +300,17 @@ final class OperatingPoint {
         }
         double gasM3PerS = gasMolPerS * BathProperties.gasMolarVolume(tempK);
         voidFraction = gasM3PerS / (gasM3PerS + BUBBLE_RISE_M_PER_S * gapM * electrodeWidthM);
-        rGapNoGas = gapM / (kappa * ohmicAreaM2);
-        rGap = rGapNoGas / Math.pow(1 - voidFraction, 1.5);
+        double solution;
+        double separator = 0;
+        if (compartments.twoCompartments()) {
+            double path = gapM - compartments.separatorThicknessM();
+            solution = 0.5 * path / (kappa * ohmicAreaM2) + 0.5 * path / (kappaA * ohmicAreaM2);
+            separator = compartments.separatorOhm(kappa, kappaA, waldenFactor);
+        } else {
+            solution = gapM / (kappa * ohmicAreaM2);
+        }
+        rGapNoGas = solution + separator;
+        rGap = solution / Math.pow(1 - voidFraction, 1.5) + separator;
         cellVoltageV = anodeE - cathodeE + amps * (rGap + contactOhm);
         return cellVoltageV;
     }

@@ -153,7 +153,12 @@ public final class ReactionNetwork {
 
         ReactionNetwork build() {
             Set<String> present = new LinkedHashSet<>();
-            for (String name : sc.electrolyte().compositionMolPerM3().keySet()) {
+            Set<String> given = new LinkedHashSet<>(sc.electrolyte().compositionMolPerM3().keySet());
+            Map<String, Double> anolyte = sc.cell().compartments().anolyteCompositionMolPerM3();
+            if (anolyte != null) {
+                given.addAll(anolyte.keySet());
+            }
+            for (String name : given) {
                 present.add(lib.findSpecies(name).map(Species::name).orElseThrow(
                         () -> new IllegalArgumentException("unknown species '" + name + "'")));
             }

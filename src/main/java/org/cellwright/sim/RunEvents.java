@@ -9,8 +9,10 @@ import org.cellwright.cell.Scenario;
 import org.cellwright.cell.StopCondition;
 
 /**
- * The events a scenario asks for: its stop conditions, the supply's limits, and the target metal nearing
- * its limiting current. Each is a {@link RunEventDetector} with a continuous switching function.
+ * The events a scenario asks for: its stop conditions, the supply's limits, the target metal nearing
+ * its limiting current, and a dendrite bridging the gap ({@code g = gap - tip height}). Each is a
+ * {@link RunEventDetector} with a continuous switching function. A short stops the run when
+ * {@code run.stop} contains "short"; otherwise the run goes on with the cell shorted.
  */
 final class RunEvents {
 
@@ -25,6 +27,7 @@ final class RunEvents {
     private final List<RunEventDetector> all = new ArrayList<>();
     private final List<RunEventDetector> stops = new ArrayList<>();
     private final List<String> stopReasons = new ArrayList<>();
+    private Double shortTimeS;
 
     RunEvents(Scenario sc, ReactionNetwork net, CellRates rates, List<RunEvent> log) {
         this.sc = sc;
@@ -37,6 +40,49 @@ final class RunEvents {
         }
         addSupplyLimit();
         addNearLimit();
+        addShortCircuit();
+    }
+
+    /** @return the time a dendrite shorted the cell (s), or null */
+    Double shortTimeS() {
+        return shortTimeS;
+    }
+
+    private void addShortCircuit() {
+        DendriteGrowth dendrite = rates.dendrite();
+        if (!dendrite.active()) {
+            return;
+        }
+        boolean stop = sc.run().stopsOnShort();
+        RunEventDetector d = new RunEventDetector((t, y) -> {
+            if (shortTimeS != null) {
+                return -1.0;
+            }
+            op.unpack(t, y);
+            return dendrite.gapM() - DendriteGrowth.tipHeightM(op);
+        }, stop, (t, y, inc) -> {
+            if (shortTimeS != null) {
+                return null;
+            }
+            op.unpack(t, y);
+            op.solve(t);
+            double amps = op.currentA;
+            op.shortCircuit(t);
+            shortTimeS = t;
+            return new RunEvent(t, RunEvent.Kind.SHORT_CIRCUIT, String.format(Locale.ROOT,
+                    "At %s a %s dendrite reached the anode across the %.3g mm gap and shorted the cell%s",
+                    RunClock.format(t), net.targetMetal().symbol(), dendrite.gapM() * 1000, stop
+                            ? "; the run stops as asked."
+                            : String.format(Locale.ROOT, ": the %.3g A now flows through the short and the deposit"
+                                    + " no longer grows.", amps)));
+        }, log);
+        // first in the list: when the short occurs, the integrator advances every detector to its time in list
+        // order, and the others must see the shorted cell there (their switching functions jump at the short)
+        all.add(0, d);
+        if (stop) {
+            stops.add(d);
+            stopReasons.add("short_circuit");
+        }
     }
 
     List<RunEventDetector> all() {
@@ -204,7 +250,7 @@ final class RunEvents {
         String ion = target.oxIndex().length > 0 ? net.species().get(target.oxIndex()[0]).name() : "metal ion";
         all.add(new RunEventDetector((t, y) -> NEAR_LIMIT - limitRatio(t, y), false,
                 (t, y, inc) -> {
-                    if (t <= 0) {
+                    if (t <= 0 || op.shorted) {
                         return null;
                     }
                     if (inc) {
@@ -223,7 +269,7 @@ final class RunEvents {
     private double limitRatio(double t, double[] y) {
         op.unpack(t, y);
         op.solve(t);
-        return Math.max(0, -op.cathodeI[net.targetSlot] * op.cathode.invIlC[net.targetSlot]);
+        return op.targetLimitRatio();
     }
 
     private String runnerUp(InstantState s) {

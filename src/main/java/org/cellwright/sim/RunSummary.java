@@ -29,6 +29,10 @@ import java.util.Map;
  * @param temperatureMaxK highest (K)
  * @param reactionChargeC charge passed by each electrode reaction ("cathode:Sn2+/Sn" to C, anodic positive)
  * @param warnings cautions and data-validity notes in plain words
+ * @param corrodedKg mass of each metal that redissolved from the deposit (metal symbol to kg): oxidants whose
+ *     reduction took more electrons than the supply gave took the rest from the deposit
+ * @param finalAnolyteConcentrationMolPerM3 each species in the anolyte at the end (mol/m3); empty when the
+ *     cell is undivided ({@code finalConcentrationMolPerM3} is then the bath, else the catholyte)
  */
 public record RunSummary(String stopReason, double durationS, double chargeC, Map<String, Double> depositKg,
                          Map<String, Double> purity, String targetMetal, double currentEfficiency, double energyJ,
@@ -37,7 +41,8 @@ public record RunSummary(String stopReason, double durationS, double chargeC, Ma
                          Map<String, Double> finalConcentrationMolPerM3, Map<String, Double> gasMol,
                          Double shortCircuitS, Double shortCircuitForecastS, String morphologyFinal,
                          double temperatureStartK, double temperatureEndK, double temperatureMaxK,
-                         Map<String, Double> reactionChargeC, List<String> warnings) {
+                         Map<String, Double> reactionChargeC, List<String> warnings, Map<String, Double> corrodedKg,
+                         Map<String, Double> finalAnolyteConcentrationMolPerM3) {
 
     /** @return the total deposit (kg) */
     public double depositTotalKg() {

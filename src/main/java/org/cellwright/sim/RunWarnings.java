@@ -26,6 +26,9 @@ final class RunWarnings {
     private final List<TracePoint> trace;
     private final Map<String, Double> gasMol;
     private final List<String> out = new ArrayList<>();
+    private Double shortS;
+    private Double forecastS;
+    private double endS;
 
     RunWarnings(Scenario sc, ReactionNetwork net, List<TracePoint> trace, Map<String, Double> gasMol) {
         this.sc = sc;
@@ -34,7 +37,21 @@ final class RunWarnings {
         this.gasMol = gasMol;
     }
 
+    /**
+     * @param shortTimeS time a dendrite shorted the cell (s), or null
+     * @param forecast when one would at the end conditions (s), or null
+     * @param runEndS when the run ended (s)
+     */
+    RunWarnings shortCircuit(Double shortTimeS, Double forecast, double runEndS) {
+        this.shortS = shortTimeS;
+        this.forecastS = forecast;
+        this.endS = runEndS;
+        return this;
+    }
+
     List<String> list() {
+        dendrites();
+        depositForm();
         chlorine();
         hydrogen();
         acid();
@@ -68,6 +85,47 @@ final class RunWarnings {
             min = Math.min(min, p.state().concentrationsMolPerM3()[j]);
         }
         return min / 1000;
+    }
+
+    private void dendrites() {
+        String metal = net.targetMetal() == null ? "metal" : net.targetMetal().symbol();
+        double gapMm = sc.cell().gapM() * 1000;
+        if (shortS != null) {
+            boolean stopped = sc.run().stopsOnShort();
+            out.add(String.format(Locale.ROOT, "Short circuit: at %s a %s dendrite bridged the %.3g mm gap. %s"
+                    + " Widen the gap, stir the bath, or lower the current to keep the deposit away from its"
+                    + " limiting current%s.", RunClock.format(shortS), metal, gapMm, stopped
+                    ? "The run stopped there, as run.stop asks."
+                    : "From then on the supply's current flowed through the short: the cell voltage collapsed,"
+                    + " no more " + metal + " was won and the leads and the short carried the whole current.",
+                    stopped ? "" : "; add \"short\" to run.stop to end a run there"));
+        } else if (forecastS != null) {
+            TracePoint last = trace.get(trace.size() - 1);
+            out.add(String.format(Locale.ROOT, "Dendrites: at the end the tallest %s dendrite stands %.3g mm high"
+                    + " in the %.3g mm gap; at the end conditions it would reach the anode %s later and short"
+                    + " the cell.", metal, last.state().dendriteHeightM() * 1000, gapMm,
+                    RunClock.format(forecastS - endS)));
+        }
+    }
+
+    private void depositForm() {
+        String form = null;
+        for (int i = trace.size() - 1; i >= 0 && form == null; i--) {
+            form = trace.get(i).state().morphology();
+        }
+        if (form == null || net.targetMetal() == null) {
+            return;
+        }
+        String metal = net.targetMetal().symbol();
+        if (form.equals("powdery")) {
+            out.add(String.format(Locale.ROOT, "Deposit form: the last %s deposited is powdery or spongy: the %s supply"
+                    + " to the cathode is at its limit. A sponge sheds, traps electrolyte and redissolves; lower the"
+                    + " current, stir, or keep the bath richer.", metal, metal));
+        } else if (form.equals("dendritic")) {
+            out.add(String.format(Locale.ROOT, "Deposit form: the last %s deposited is dendritic (near its limiting"
+                    + " current): loose crystals that grow toward the anode. Lower the current or stir%s.", metal,
+                    sc.deposit().additives() ? "" : ", or use additives"));
+        }
     }
 
     private void chlorine() {

@@ -17,6 +17,8 @@ final class SummaryBuilder {
     private final double[] y;
     private final double endS;
     private String stopReason = "end";
+    private Double shortS;
+    private Double forecastS;
 
     SummaryBuilder(Scenario sc, ReactionNetwork net, StateLayout layout, List<TracePoint> trace, double[] y,
                    double endS) {
@@ -33,6 +35,16 @@ final class SummaryBuilder {
         return this;
     }
 
+    /**
+     * @param shortTimeS time a dendrite shorted the cell (s), or null
+     * @param forecast when one would if the end conditions held (s), or null
+     */
+    SummaryBuilder shortCircuit(Double shortTimeS, Double forecast) {
+        this.shortS = shortTimeS;
+        this.forecastS = forecast;
+        return this;
+    }
+
     RunSummary build() {
         Map<String, Double> deposit = new LinkedHashMap<>();
         double total = 0;
@@ -41,6 +53,11 @@ final class SummaryBuilder {
             double kg = Math.max(0, y[layout.deposit0 + m]) * metal.molarMassKgPerMol();
             deposit.put(metal.symbol(), kg);
             total += kg;
+        }
+        Map<String, Double> corroded = new LinkedHashMap<>();
+        for (int m = 0; m < net.depositMetals().size(); m++) {
+            Metal metal = net.depositMetals().get(m);
+            corroded.put(metal.symbol(), Math.max(0, y[layout.corroded0 + m]) * metal.molarMassKgPerMol());
         }
         Map<String, Double> purity = new LinkedHashMap<>();
         for (var e : deposit.entrySet()) {
@@ -54,8 +71,16 @@ final class SummaryBuilder {
         double specific = targetKg > 0 ? energy / targetKg : Double.NaN;
         Map<String, Double> conc = new LinkedHashMap<>();
         TracePoint last = trace.get(trace.size() - 1);
+        Map<String, Double> anolyte = new LinkedHashMap<>();
         for (int j = 0; j < net.species().size(); j++) {
             conc.put(net.species().get(j).name(), last.state().concentrationsMolPerM3()[j]);
+            if (last.state().anolyteConcentrationsMolPerM3() != null) {
+                anolyte.put(net.species().get(j).name(), last.state().anolyteConcentrationsMolPerM3()[j]);
+            }
+        }
+        String morphology = null;
+        for (int i = trace.size() - 1; i >= 0 && morphology == null; i--) {
+            morphology = trace.get(i).state().morphology();
         }
         Map<String, Double> gas = new LinkedHashMap<>();
         for (int g = 0; g < StateLayout.GASES.length; g++) {
@@ -74,10 +99,11 @@ final class SummaryBuilder {
             tMax = Math.max(tMax, p.state().temperatureK());
         }
         double vMean = endS > 0 ? y[layout.voltageTime] / endS : trace.get(0).state().cellVoltageV();
-        List<String> warnings = new RunWarnings(sc, net, trace, gas).list();
+        List<String> warnings = new RunWarnings(sc, net, trace, gas).shortCircuit(shortS, forecastS, endS)
+                .list();
         return new RunSummary(stopReason, endS, charge, deposit, purity, target, efficiency, energy, specific,
                 trace.get(0).state().cellVoltageV(), last.state().cellVoltageV(), vMean, vMax, conc, gas,
-                null, null, null, trace.get(0).state().temperatureK(), last.state().temperatureK(), tMax,
-                reactionCharge, warnings);
+                shortS, forecastS, morphology, trace.get(0).state().temperatureK(), last.state().temperatureK(), tMax,
+                reactionCharge, warnings, corroded, anolyte);
     }
 }
