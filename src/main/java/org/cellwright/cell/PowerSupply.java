@@ -107,6 +107,11 @@ public record PowerSupply(ControlMode mode, double currentA, double voltageV, do
         return new PowerSupply(ControlMode.CURRENT, amps, voltageV, voltageLimitV, currentLimitA, List.of());
     }
 
+    /** @return a copy holding another constant voltage (V), schedule dropped */
+    public PowerSupply withVoltage(double volts) {
+        return new PowerSupply(ControlMode.VOLTAGE, currentA, volts, voltageLimitV, currentLimitA, List.of());
+    }
+
     /** @return a copy with another schedule */
     public PowerSupply withSchedule(List<SetPoint> points) {
         return new PowerSupply(mode, currentA, voltageV, voltageLimitV, currentLimitA, points);

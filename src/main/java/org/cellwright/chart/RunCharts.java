@@ -39,7 +39,7 @@ public final class RunCharts {
     private static final int[] BAND_HUES = {7, 1, 0, 2, 6, 3};
 
     private final RunChartModel model;
-    private final double gapMm;
+    private double gapMm;
     private final JFreeChart concentrations;
     private final JFreeChart voltage;
     private final JFreeChart current;
@@ -155,6 +155,25 @@ public final class RunCharts {
     public void setStyle(ChartStyle newStyle) {
         this.style = newStyle;
         restyle();
+    }
+
+    /**
+     * Moves the gap line of the dendrite chart (when a run with another gap is shown on the same charts).
+     *
+     * @param gapM the anode-cathode gap (m), > 0
+     */
+    public void setGap(double gapM) {
+        if (!(gapM > 0)) {
+            throw new IllegalArgumentException("gap must be > 0 m, got " + gapM);
+        }
+        this.gapMm = gapM * 1000;
+        placeMarkers();
+        fitDendriteAxis();
+    }
+
+    /** @return the gap drawn on the dendrite chart (m) */
+    public double gapM() {
+        return gapMm / 1000;
     }
 
     /**

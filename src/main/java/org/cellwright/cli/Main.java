@@ -1,6 +1,9 @@
 package org.cellwright.cli;
 
+import java.awt.GraphicsEnvironment;
 import java.util.concurrent.Callable;
+
+import org.cellwright.ui.CellwrightWindow;
 
 import picocli.CommandLine;
 import picocli.CommandLine.Command;
@@ -15,7 +18,8 @@ import picocli.CommandLine.Command;
         versionProvider = VersionInfo.class,
         description = "Simulates an electrolytic cell: depletion, competing electrode reactions, mass transfer,"
                 + " ohmic loss, heating and the deposit.",
-        subcommands = {CommandLine.HelpCommand.class, RunCommand.class, CheckCommand.class, LibraryCommand.class},
+        subcommands = {CommandLine.HelpCommand.class, RunCommand.class, CheckCommand.class, LibraryCommand.class,
+                SweepCommand.class, PlanCommand.class, MakeupCommand.class, FitCommand.class, ReportCommand.class},
         exitCodeListHeading = "%nExit codes:%n",
         exitCodeList = {"0:success", "1:internal failure", "2:bad input (file, value or option)"})
 public final class Main implements Callable<Integer> {
@@ -28,9 +32,19 @@ public final class Main implements Callable<Integer> {
     @CommandLine.Spec
     CommandLine.Model.CommandSpec spec;
 
+    /** Set once the window is open: then {@link #main} leaves the program running until the window closes. */
+    private static volatile boolean windowOpen;
+
     @Override
     public Integer call() {
-        spec.commandLine().usage(spec.commandLine().getOut());
+        if (GraphicsEnvironment.isHeadless()) {
+            spec.commandLine().getErr().println("cellwright: there is no display to open the window on;"
+                    + " use one of the commands below (or set DISPLAY).");
+            spec.commandLine().usage(spec.commandLine().getErr());
+            return BAD_INPUT;
+        }
+        CellwrightWindow.launch();
+        windowOpen = true;
         return 0;
     }
 
@@ -42,6 +56,9 @@ public final class Main implements Callable<Integer> {
     }
 
     public static void main(String[] args) {
-        System.exit(commandLine().execute(args));
+        int code = commandLine().execute(args);
+        if (code != 0 || !windowOpen) {
+            System.exit(code);
+        }
     }
 }

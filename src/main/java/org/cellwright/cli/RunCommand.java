@@ -9,6 +9,8 @@ import java.util.concurrent.Callable;
 
 import org.cellwright.chart.ChartSheet;
 import org.cellwright.chart.ChartStyle;
+import org.cellwright.chart.SpreadBands;
+import org.cellwright.chart.SpreadText;
 import org.cellwright.chart.SummaryText;
 import org.cellwright.chem.ChemLibrary;
 import org.cellwright.io.AtomicFile;
@@ -17,8 +19,13 @@ import org.cellwright.io.RunCsvWriter;
 import org.cellwright.io.RunJsonWriter;
 import org.cellwright.io.ScenarioException;
 import org.cellwright.io.ScenarioReader;
+import org.cellwright.io.SpreadJsonWriter;
 import org.cellwright.sim.CellSimulation;
 import org.cellwright.sim.RunResult;
+import org.cellwright.study.Cancellation;
+import org.cellwright.study.SpreadResult;
+import org.cellwright.study.SpreadStudy;
+import org.cellwright.study.Sweep;
 
 import picocli.CommandLine;
 import picocli.CommandLine.Command;
@@ -49,6 +56,16 @@ public final class RunCommand implements Callable<Integer> {
 
     @Option(names = "--chart", paramLabel = "FILE", description = "Write a chart sheet; the extension (.png or .svg) picks the format.")
     Path chart;
+
+    @Option(names = "--spread", paramLabel = "N",
+            description = "Also run N samples of the uncertain inputs (diffusion layer, exchange current densities,"
+                    + " conductivity, diffusion coefficients; docs/studies.md) in parallel: 5-95 %% ranges in the"
+                    + " summary and the JSON, bands on the chart sheet.")
+    Integer spread;
+
+    @Option(names = "--seed", paramLabel = "S", defaultValue = "1",
+            description = "Random seed of --spread (default 1: the same samples every time).")
+    long seed;
 
     @Option(names = "--set", paramLabel = "KEY=VALUE",
             description = "Override a scenario value, e.g. --set supply.current=\"3 A\" --set cell.gap=\"20 mm\" (repeatable).")
@@ -89,31 +106,61 @@ public final class RunCommand implements Callable<Integer> {
             return Main.BAD_INPUT;
         }
         read.warnings().forEach(p -> err.println(p.format()));
+        if (spread != null && (spread < 1 || spread > SpreadStudy.MAX_SAMPLES)) {
+            err.println("cellwright run: --spread must be from 1 to " + SpreadStudy.MAX_SAMPLES + ", got " + spread);
+            return Main.BAD_INPUT;
+        }
         RunResult result;
+        SpreadResult study = null;
         try {
-            result = CellSimulation.withDefaults().run(read.scenario(), lib, null);
+            if (spread == null) {
+                result = CellSimulation.withDefaults().run(read.scenario(), lib, null);
+            } else {
+                ProgressLine progress = new ProgressLine(err, "spread", ProgressLine.onTerminal());
+                study = new SpreadStudy(lib, Sweep.allCores()).run(read.scenario(), spread, seed, progress,
+                        Cancellation.none());
+                progress.finish();
+                result = study.nominal();
+            }
         } catch (IllegalArgumentException e) {
             err.println(file + ": " + e.getMessage());
             return Main.BAD_INPUT;
         }
+        SpreadResult spreadResult = study;
         String label = file.getFileName().toString();
         boolean jsonToStdout = "-".equals(json);
         if (json != null && !jsonToStdout) {
-            AtomicFile.write(Path.of(json), o -> RunJsonWriter.write(label, result, o));
+            AtomicFile.write(Path.of(json), o -> writeJson(label, result, spreadResult, o));
         }
         if (csv != null) {
             AtomicFile.write(csv, o -> RunCsvWriter.write(result, o));
         }
         if (chart != null) {
-            ChartSheet.of(result, ChartStyle.light()).export(chart);
+            ChartSheet sheet = ChartSheet.of(result, ChartStyle.light());
+            if (spreadResult != null) {
+                SpreadBands.apply(sheet.charts(), spreadResult.bands(), spreadResult.ran());
+            }
+            sheet.export(chart);
         }
         if (jsonToStdout) {
             java.io.ByteArrayOutputStream buffer = new java.io.ByteArrayOutputStream();
-            RunJsonWriter.write(label, result, buffer);
+            writeJson(label, result, spreadResult, buffer);
             out.print(buffer.toString(java.nio.charset.StandardCharsets.UTF_8));
         } else {
             SummaryText.lines(label, result).forEach(out::println);
+            if (spreadResult != null) {
+                SpreadText.lines(spreadResult).forEach(out::println);
+            }
         }
         return 0;
+    }
+
+    private static void writeJson(String label, RunResult result, SpreadResult spread, java.io.OutputStream o)
+            throws IOException {
+        if (spread == null) {
+            RunJsonWriter.write(label, result, o);
+        } else {
+            SpreadJsonWriter.write(label, spread, o);
+        }
     }
 }

@@ -2,7 +2,6 @@ package org.cellwright.sim;
 
 import java.util.List;
 
-import org.apache.commons.math3.analysis.solvers.BrentSolver;
 import org.cellwright.cell.ControlMode;
 import org.cellwright.cell.PowerSupply;
 import org.cellwright.cell.Scenario;
@@ -67,7 +66,6 @@ final class OperatingPoint {
     private final double steadyLayerM;
     private final double electrodeWidthM;
     private final double[] gasPerCharge;
-    private final BrentSolver brent = new BrentSolver(1e-12, 1e-10);
 
     final CompartmentExchange compartments;
     final double shortOhm;
@@ -322,20 +320,69 @@ final class OperatingPoint {
      * leaves the workspace there.
      */
     private double currentFor(double volts, double maxAmps) {
-        if (cellAt(0) >= volts) {
+        double lo = 0;
+        double fLo = cellAt(0) - volts;
+        if (fLo >= 0) {
             return 0;
         }
         double hi = maxAmps;
+        double fHi;
         if (Double.isInfinite(hi)) {
             hi = Math.max(1e-3, volts / Math.max(rGapNoGas + contactOhm, 1e-9));
-            while (cellAt(hi) < volts) {
+            fHi = cellAt(hi) - volts;
+            while (fHi < 0) {
+                lo = hi;
+                fLo = fHi;
                 hi *= 2;
+                fHi = cellAt(hi) - volts;
             }
-        } else if (cellAt(hi) <= volts) {
-            return hi;
+        } else {
+            fHi = cellAt(hi) - volts;
+            if (fHi <= 0) {
+                return hi;
+            }
         }
-        double root = brent.solve(500, amps -> cellAt(amps) - volts, 0, hi);
+        double root = illinois(volts, lo, fLo, hi, fHi);
         cellAt(root);
         return root;
+    }
+
+    /**
+     * Regula falsi with the Illinois modification (Dowell &amp; Jarratt, BIT 11 (1971) 168) on a bracket whose
+     * end values are known: it never evaluates an end again, so a value near zero cannot change sign between
+     * evaluations (the potentials behind U(I) are solved iteratively, to round-off).
+     */
+    private double illinois(double volts, double lo, double fLo, double hi, double fHi) {
+        int side = 0;
+        double x = lo;
+        for (int it = 0; it < 200; it++) {
+            x = (lo * fHi - hi * fLo) / (fHi - fLo);
+            if (!(x > lo && x < hi)) {
+                x = 0.5 * (lo + hi);
+            }
+            double fx = cellAt(x) - volts;
+            if (fx == 0 || hi - lo <= 1e-12 * Math.max(1, hi)) {
+                return x;
+            }
+            if (fx < 0) {
+                lo = x;
+                fLo = fx;
+                if (side == -1) {
+                    fHi *= 0.5;
+                }
+                side = -1;
+            } else {
+                hi = x;
+                fHi = fx;
+                if (side == 1) {
+                    fLo *= 0.5;
+                }
+                side = 1;
+            }
+            if (Math.abs(fx) <= 1e-12 * Math.max(1, Math.abs(volts))) {
+                return x;
+            }
+        }
+        return x;
     }
 }

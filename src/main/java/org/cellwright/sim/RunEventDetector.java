@@ -27,9 +27,17 @@ final class RunEventDetector implements EventHandler {
     private final Wording wording;
     private final List<RunEvent> log;
     private boolean fired;
-    private double lastT = Double.NaN;
-    private double[] lastY;
-    private double lastG;
+    /** How many recent (time, value) pairs are recalled. */
+    private static final int RECALLED = 8;
+    private final double[] recalledT = filledNaN();
+    private final double[] recalledG = new double[RECALLED];
+    private int next;
+
+    private static double[] filledNaN() {
+        double[] a = new double[RECALLED];
+        java.util.Arrays.fill(a, Double.NaN);
+        return a;
+    }
 
     RunEventDetector(ToDoubleBiFunction<Double, double[]> g, boolean stop, Wording wording, List<RunEvent> log) {
         this.g = g;
@@ -49,19 +57,23 @@ final class RunEventDetector implements EventHandler {
     }
 
     /**
-     * The switching function. The same (t, y) always gives the same value: the electrode potentials behind
-     * some switching functions are solved iteratively from the last solution, and a root search that
-     * re-evaluates the start of a step must see the sign it saw before.
+     * The switching function. A time already asked about gives the value it gave then: the electrode
+     * potentials behind some switching functions are solved iteratively from the last solution, and the state
+     * at the start of a step comes from a different interpolator than at the end of the step before, so a
+     * fresh evaluation there could change the sign of a value near zero and break the root search (Commons
+     * Math requires the sign it saw at the step's start).
      */
     @Override
     public double g(double t, double[] y) {
-        if (t == lastT && java.util.Arrays.equals(y, lastY)) {
-            return lastG;
+        for (int i = 0; i < RECALLED; i++) {
+            if (recalledT[i] == t) {
+                return recalledG[i];
+            }
         }
         double value = g.applyAsDouble(t, y);
-        lastT = t;
-        lastY = y.clone();
-        lastG = value;
+        recalledT[next] = t;
+        recalledG[next] = value;
+        next = (next + 1) % RECALLED;
         return value;
     }
 

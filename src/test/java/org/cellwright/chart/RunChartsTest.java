@@ -113,6 +113,22 @@ class RunChartsTest {
     }
 
     @Test
+    void labelsNearTheRightEndStandLeftOfTheirLine() {
+        RunCharts c = RunCharts.of(limited, ChartStyle.light());
+        double span = c.spanS();
+        c.setEvents(List.of(new RunEvent(0.2 * span, RunEvent.Kind.SCHEDULE_STEP, "a step"),
+                new RunEvent(0.95 * span, RunEvent.Kind.SCHEDULE_STEP, "another step")));
+        List<?> markers = new ArrayList<>(c.concentrations().getXYPlot().getDomainMarkers(Layer.BACKGROUND));
+        assertEquals(org.jfree.chart.ui.TextAnchor.TOP_LEFT, ((ValueMarker) markers.get(0)).getLabelTextAnchor());
+        // within the last 15 % of the axis the label would be cut off by the plot's edge on the right
+        assertEquals(org.jfree.chart.ui.TextAnchor.TOP_RIGHT, ((ValueMarker) markers.get(1)).getLabelTextAnchor());
+        assertEquals("step", ((ValueMarker) markers.get(1)).getLabel());
+        // the second label stands one line lower than the first
+        assertEquals(EventMarkers.LABEL_LINE_PX, ((ValueMarker) markers.get(1)).getLabelOffset().getTop()
+                - ((ValueMarker) markers.get(0)).getLabelOffset().getTop(), 1e-9);
+    }
+
+    @Test
     void referenceRunIsOverlaidOutsideTheLegend() {
         RunCharts c = RunCharts.of(limited, ChartStyle.light());
         int legendBefore = c.concentrations().getXYPlot().getLegendItems().getItemCount();

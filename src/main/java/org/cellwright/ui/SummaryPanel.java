@@ -1,0 +1,168 @@
+package org.cellwright.ui;
+
+import java.awt.Dimension;
+import java.awt.Font;
+import java.awt.GridBagConstraints;
+import java.awt.GridBagLayout;
+import java.awt.Insets;
+import java.awt.Rectangle;
+import java.util.ArrayList;
+import java.util.List;
+
+import javax.swing.BorderFactory;
+import javax.swing.JLabel;
+import javax.swing.JPanel;
+import javax.swing.Scrollable;
+
+import org.cellwright.sim.RunResult;
+
+/**
+ * A run's summary beside the charts: the key figures (each with a tooltip saying how it is reckoned) and
+ * where the charge went at each electrode, in plain words. Its rows are made once and then only get new text,
+ * so that a replot after every slider move costs next to nothing here.
+ */
+final class SummaryPanel extends JPanel implements Scrollable {
+
+    private static final long serialVersionUID = 1L;
+    /** Most figure rows (see {@link SummaryFigures#of}). */
+    private static final int FIGURE_ROWS = 14;
+    /** Most "where the charge went" lines: one per electrode. */
+    private static final int SHARE_ROWS = 2;
+
+    private final WrapText head = new WrapText("", null, 0, Font.BOLD, 330);
+    private final List<JLabel> labels = new ArrayList<>();
+    private final List<WrapText> values = new ArrayList<>();
+    private final JLabel where = new JLabel("Where the charge went");
+    private final List<WrapText> shares = new ArrayList<>();
+    private final WrapText empty = new WrapText("Run the scenario (F5) or move a slider: the deposit, current"
+            + " efficiency, specific energy, time to short and the deposit's form appear here.", "muted.foreground",
+            0, Font.PLAIN, 330);
+
+    SummaryPanel() {
+        super(new GridBagLayout());
+        setBorder(BorderFactory.createEmptyBorder(8, 10, 8, 10));
+        int row = 0;
+        add(empty, at(row++, 0, 2, 0));
+        add(head, at(row++, 0, 2, 0));
+        for (int i = 0; i < FIGURE_ROWS; i++) {
+            JLabel l = new JLabel() {
+                private static final long serialVersionUID = 1L;
+
+                @Override
+                public java.awt.Color getForeground() {
+                    return UiTheme.color("muted.foreground");
+                }
+            };
+            WrapText v = new WrapText("", null, 0, Font.PLAIN, 200);
+            labels.add(l);
+            values.add(v);
+            add(l, at(row, 0, 1, 4));
+            add(v, at(row++, 1, 1, 4));
+        }
+        where.setFont(UiTheme.font(0, Font.BOLD));
+        where.setToolTipText("Each electrode reaction's share of the charge passed, largest first.");
+        add(where, at(row++, 0, 2, 12));
+        for (int i = 0; i < SHARE_ROWS; i++) {
+            WrapText s = new WrapText("", null, 0, Font.PLAIN, 330);
+            shares.add(s);
+            add(s, at(row++, 0, 2, 3));
+        }
+        GridBagConstraints c = at(row, 0, 2, 0);
+        c.weighty = 1;
+        add(new JLabel(), c);
+        clear();
+    }
+
+    /** Shows that nothing has run yet. */
+    void clear() {
+        empty.setVisible(true);
+        head.setVisible(false);
+        labels.forEach(l -> l.setVisible(false));
+        values.forEach(v -> v.setVisible(false));
+        where.setVisible(false);
+        shares.forEach(s -> s.setVisible(false));
+        revalidate();
+        repaint();
+    }
+
+    /**
+     * @param title the run's label
+     * @param r the run
+     */
+    void show(String title, RunResult r) {
+        empty.setVisible(false);
+        head.setVisible(true);
+        head.show("Whole run: " + title);
+        List<SummaryFigures.Figure> figures = SummaryFigures.of(r);
+        for (int i = 0; i < FIGURE_ROWS; i++) {
+            boolean on = i < figures.size();
+            labels.get(i).setVisible(on);
+            values.get(i).setVisible(on);
+            if (on) {
+                SummaryFigures.Figure f = figures.get(i);
+                labels.get(i).setText(f.label());
+                labels.get(i).setToolTipText(f.tooltip());
+                values.get(i).show(f.value());
+                values.get(i).setToolTipText(f.tooltip());
+            }
+        }
+        where.setVisible(true);
+        List<String> lines = SummaryFigures.chargeShares(r);
+        for (int i = 0; i < SHARE_ROWS; i++) {
+            shares.get(i).setVisible(i < lines.size());
+            if (i < lines.size()) {
+                shares.get(i).show(lines.get(i));
+            }
+        }
+        revalidate();
+        repaint();
+    }
+
+    /** @return the figure texts shown, "label: value" (for tests) */
+    List<String> shownFigures() {
+        List<String> out = new ArrayList<>();
+        for (int i = 0; i < FIGURE_ROWS; i++) {
+            if (labels.get(i).isVisible()) {
+                out.add(labels.get(i).getText() + ": " + values.get(i).getText());
+            }
+        }
+        return out;
+    }
+
+    private static GridBagConstraints at(int row, int col, int width, int top) {
+        GridBagConstraints c = new GridBagConstraints();
+        c.gridy = row;
+        c.gridx = col;
+        c.gridwidth = width;
+        c.weightx = col == 1 || width == 2 ? 1 : 0;
+        c.fill = GridBagConstraints.HORIZONTAL;
+        c.anchor = GridBagConstraints.NORTHWEST;
+        c.insets = new Insets(top, 0, 0, col == 0 && width == 1 ? 10 : 0);
+        return c;
+    }
+
+    @Override
+    public Dimension getPreferredScrollableViewportSize() {
+        return getPreferredSize();
+    }
+
+    @Override
+    public int getScrollableUnitIncrement(Rectangle visibleRect, int orientation, int direction) {
+        return 16;
+    }
+
+    @Override
+    public int getScrollableBlockIncrement(Rectangle visibleRect, int orientation, int direction) {
+        return Math.max(16, visibleRect.height - 32);
+    }
+
+    @Override
+    public boolean getScrollableTracksViewportWidth() {
+        return true;
+    }
+
+    @Override
+    public boolean getScrollableTracksViewportHeight() {
+        return false;
+    }
+}

@@ -1,0 +1,53 @@
+package org.cellwright.chart;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.util.List;
+
+import org.cellwright.sim.RunResult;
+import org.junit.jupiter.api.Test;
+
+/** The hazards each shipped scenario raises follow from its anode, bath and current. */
+class SafetyCautionsTest {
+
+    private static List<String> hazards(RunResult r) {
+        return SafetyCautions.of(r, ReportFixture.LIBRARY).stream().map(SafetyCautions.Caution::hazard).toList();
+    }
+
+    @Test
+    void inertGraphiteInChlorideGivesChlorineAndTheAcidBathAcid() {
+        List<SafetyCautions.Caution> c = SafetyCautions.of(ReportFixture.tin(), ReportFixture.LIBRARY);
+        // source: scenarios/tin-stripping-liquor.toml: graphite anode (inert in the library), Cl- 1.975 mol/L,
+        // H+ 1.5 mol/L, stainless cathode giving hydrogen once tin reaches its limit
+        assertEquals(List.of("Chlorine", "Hydrogen", "Acid"), c.stream().map(SafetyCautions.Caution::hazard).toList());
+        assertTrue(c.get(0).trigger().contains("graphite") && c.get(0).trigger().contains("1.98 mol/L"),
+                c.get(0).trigger());
+    }
+
+    @Test
+    void leadCalciumAnodeInSulfateGivesLeadButNoChlorine() {
+        List<String> h = hazards(ReportFixture.copper());
+        // source: scenarios/copper-etchant-bleed.toml: lead-calcium anode, sulfate bath without chloride
+        assertTrue(h.contains("Lead") && h.contains("Acid"), h.toString());
+        assertTrue(!h.contains("Chlorine"), h.toString());
+    }
+
+    @Test
+    void aSolubleAnodeInChlorideGivesNoChlorineAndHighCurrentIsElectrical() {
+        // a tin anode dissolves instead of giving off chlorine (library: material.tin has soluble_metal Sn)
+        List<String> h = hazards(ReportFixture.run("tin-stripping-liquor.toml", "anode.material=tin",
+                "supply.current=\"6 A\"", "run.duration=\"20 min\""));
+        assertTrue(!h.contains("Chlorine"), h.toString());
+        // source: SafetyCautions.HIGH_CURRENT_A, 5 A (common practice); 6 A is above it
+        assertTrue(h.contains("Electrical"), h.toString());
+    }
+
+    @Test
+    void notesOnTheDataAreKeptApartFromHazards() {
+        List<String> notes = SafetyCautions.dataNotes(ReportFixture.tin());
+        assertTrue(notes.stream().noneMatch(n -> n.startsWith("Chlorine") || n.startsWith("Hydrogen")), notes.toString());
+        // source: the tin run builds Sn4+ above 1 g/L, which the engine notes (RunWarnings.tinChemistry)
+        assertTrue(notes.stream().anyMatch(n -> n.startsWith("Tin(IV)")), notes.toString());
+    }
+}
