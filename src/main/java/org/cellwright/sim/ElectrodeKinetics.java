@@ -65,11 +65,9 @@ final class ElectrodeKinetics {
     private final int[] limitRed;
     private final double[] ia;
     private final double[] ic;
-    private final double[] icFull;
     private final double[] dia;
     private final double[] dic;
     private final double[] cur;
-    private final double[] cathodic;
     private final double[] dcur;
     private final double[] share;
     private final double[] dShare;
@@ -97,11 +95,10 @@ final class ElectrodeKinetics {
         limitRed = new int[count];
         ia = new double[count];
         ic = new double[count];
-        icFull = new double[count];
+
         dia = new double[count];
         dic = new double[count];
         cur = new double[count];
-        cathodic = new double[count];
         dcur = new double[count];
         int species = 0;
         for (ReactionSlot s : slots) {
@@ -232,7 +229,6 @@ final class ElectrodeKinetics {
                 da += aA2[k] * a2;
                 dc += -aC2[k] * c2;
             }
-            icFull[k] = cc;
             if (metalWeight[k] < 1 && a > cc) {
                 // above the metal's equilibrium potential: only the deposit dissolves, from the share of the
                 // surface it covers; the bare rest neither dissolves nor takes metal (no deposition above the
@@ -278,8 +274,6 @@ final class ElectrodeKinetics {
             double den = 1 + a * invIlA[k] + c * invIlC[k];
             double num = a - c;
             cur[k] = num / den;
-            double cf = icFull[k] / (1 + xo);
-            cathodic[k] = cf / (1 + cf * invIlC[k]);
             if (derivatives) {
                 double da = (dia[k] * (1 + xr) - ia[k] * dxr) / ((1 + xr) * (1 + xr));
                 double dc = (dic[k] * (1 + xo) - ic[k] * dxo) / ((1 + xo) * (1 + xo));
@@ -384,17 +378,6 @@ final class ElectrodeKinetics {
      */
     double lastCathodicKinetic(int k) {
         return ic[k];
-    }
-
-    /**
-     * The reduction of reaction {@code k} alone, with its mass-transfer loss, at the potential of the last
-     * {@link #currents} call (A/m2, positive): {@code i_c' / (1 + i_c' / iL_c)}, without the reverse
-     * reaction and over the whole electrode. Over its limiting current it is how close the reduction runs to
-     * its mass-transfer limit, a ratio that stays continuous when the net current changes sign (a deposit
-     * redissolving in a bath that has lost the metal's ion).
-     */
-    double lastCathodicCurrent(int k) {
-        return cathodic[k];
     }
 
     /**

@@ -68,6 +68,7 @@ final class OperatingPoint {
     private final double[] gasPerCharge;
 
     final CompartmentExchange compartments;
+    private final double limitFloorMolPerM3;
     final double shortOhm;
     final double[] c;
     final double[] cA;
@@ -117,6 +118,8 @@ final class OperatingPoint {
         this.compartments = new CompartmentExchange(sc.cell().compartments(), net.species(),
                 sc.electrolyte().volumeM3(), ohmicAreaM2);
         this.shortOhm = sc.deposit().shortResistanceOhm();
+        this.limitFloorMolPerM3 = LIMIT_FLOOR_SHARE * Math.max(1e-3, sc.electrolyte().compositionMolPerM3().values()
+                .stream().mapToDouble(Double::doubleValue).max().orElse(1.0));
         int n = net.species().size();
         c = new double[n];
         cA = compartments.twoCompartments() ? new double[n] : c;
@@ -219,16 +222,30 @@ final class OperatingPoint {
     }
 
     /**
+     * The target ion's limiting current fades out of {@link #targetLimitRatio} below this share of the bath's
+     * most concentrated species: a millionth, a hundred times the integrator's absolute tolerance on
+     * concentrations, below which the share of two vanishing currents would follow round-off.
+     */
+    static final double LIMIT_FLOOR_SHARE = 1e-6;
+
+    /**
      * How close the target metal's deposition runs to its limiting current at the operating point last solved:
-     * its cathodic current over its limiting current (0 while shorted, or without a target). The cathodic part
-     * alone keeps the ratio continuous where the net current changes sign.
+     * its net deposition current over its limiting current, 0 while it redissolves or the cell is shorted, and
+     * faded out as {@code c / (c + c_floor)} when the ion is all but gone (c_floor a millionth of the bath's
+     * most concentrated species), so that it stays a smooth function of the state there.
      */
     double targetLimitRatio() {
         int k = net.targetSlot;
         if (k < 0 || shorted) {
             return 0;
         }
-        return cathode.lastCathodicCurrent(k) * cathode.invIlC[k];
+        ReactionSlot s = net.cathodeSlots.get(k);
+        double fade = 1;
+        if (s.oxIndex().length > 0) {
+            double ion = c[s.oxIndex()[0]];
+            fade = ion / (ion + limitFloorMolPerM3);
+        }
+        return Math.max(0, -cathodeI[k] * cathode.invIlC[k]) * fade;
     }
 
     /** End of the integration segment under way (s): at its end the set value is the left limit. */

@@ -44,6 +44,21 @@ public record RunSummary(String stopReason, double durationS, double chargeC, Ma
                          Map<String, Double> reactionChargeC, List<String> warnings, Map<String, Double> corrodedKg,
                          Map<String, Double> finalAnolyteConcentrationMolPerM3) {
 
+    /** A summary with nothing redissolved and no anolyte (an undivided cell). */
+    public RunSummary(String stopReason, double durationS, double chargeC, Map<String, Double> depositKg,
+                      Map<String, Double> purity, String targetMetal, double currentEfficiency, double energyJ,
+                      double specificEnergyJPerKg, double cellVoltageStartV, double cellVoltageEndV,
+                      double cellVoltageMeanV, double cellVoltageMaxV,
+                      Map<String, Double> finalConcentrationMolPerM3, Map<String, Double> gasMol,
+                      Double shortCircuitS, Double shortCircuitForecastS, String morphologyFinal,
+                      double temperatureStartK, double temperatureEndK, double temperatureMaxK,
+                      Map<String, Double> reactionChargeC, List<String> warnings) {
+        this(stopReason, durationS, chargeC, depositKg, purity, targetMetal, currentEfficiency, energyJ,
+                specificEnergyJPerKg, cellVoltageStartV, cellVoltageEndV, cellVoltageMeanV, cellVoltageMaxV,
+                finalConcentrationMolPerM3, gasMol, shortCircuitS, shortCircuitForecastS, morphologyFinal,
+                temperatureStartK, temperatureEndK, temperatureMaxK, reactionChargeC, warnings, Map.of(), Map.of());
+    }
+
     /** @return the total deposit (kg) */
     public double depositTotalKg() {
         return depositKg.values().stream().mapToDouble(Double::doubleValue).sum();

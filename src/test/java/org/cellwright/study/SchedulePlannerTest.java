@@ -137,7 +137,9 @@ class SchedulePlannerTest {
         assertTrue(p.maxFraction() < F, "fraction lowered: " + p.maxFraction());
         assertTrue(p.steps().stream().allMatch(s -> s.value() <= 0.6), p.steps().toString());
         assertTrue(p.notes().stream().anyMatch(n -> n.contains("short")), p.notes().toString());
-        assertTrue(p.verification().summary().shortCircuitForecastS() == null);
+        // the engine's own dendrite model may still forecast a silver short, but only after the plan's end
+        Double forecast = p.verification().summary().shortCircuitForecastS();
+        assertTrue(forecast == null || forecast > p.durationS(), forecast + " within " + p.durationS());
     }
 
     @Test
