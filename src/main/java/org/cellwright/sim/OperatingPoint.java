@@ -220,15 +220,17 @@ final class OperatingPoint {
 
     /**
      * How close the target metal's deposition runs to its limiting current at the operating point last solved:
-     * its cathodic current over its limiting current (0 while shorted, or without a target). The cathodic part
-     * alone keeps the ratio continuous where the net current changes sign.
+     * its net deposition current over its limiting current, 0 where the metal does not deposit (while shorted,
+     * without a target, or where the deposit redissolves). Not the cathodic branch alone: for a metal with a
+     * high exchange current density (Ag, Pb, Sn) both branches are far larger than the net current near its
+     * equilibrium potential.
      */
     double targetLimitRatio() {
         int k = net.targetSlot;
         if (k < 0 || shorted) {
             return 0;
         }
-        return cathode.lastCathodicCurrent(k) * cathode.invIlC[k];
+        return Math.max(0, -cathodeI[k]) * cathode.invIlC[k];
     }
 
     /** End of the integration segment under way (s): at its end the set value is the left limit. */

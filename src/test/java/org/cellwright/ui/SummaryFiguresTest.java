@@ -27,7 +27,9 @@ class SummaryFiguresTest {
         assertEquals(String.format(Locale.ROOT, "%.4g A h", s.chargeC() / 3600), f.get("Charge"));
         assertTrue(f.get("Deposit").startsWith(String.format(Locale.ROOT, "Sn %.4g g", s.depositKg().get("Sn") * 1000)));
         assertEquals("at the set duration, after 6 h 0 min", f.get("Ended"));
-        assertEquals("none foreseen", f.get("Short circuit"));
+        assertEquals(s.shortCircuitS() == null && s.shortCircuitForecastS() == null ? "none foreseen"
+                : "at " + org.cellwright.sim.RunClock.format(s.shortCircuitS() != null ? s.shortCircuitS()
+                : s.shortCircuitForecastS()), f.get("Short circuit").replace("forecast ", ""));
         for (String needed : List.of("Deposit", "Current efficiency", "Specific energy", "Short circuit", "Deposit form")) {
             assertTrue(f.containsKey(needed), needed);
         }
