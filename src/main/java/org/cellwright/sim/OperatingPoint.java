@@ -230,9 +230,12 @@ final class OperatingPoint {
 
     /**
      * How close the target metal's deposition runs to its limiting current at the operating point last solved:
-     * its net deposition current over its limiting current, 0 while it redissolves or the cell is shorted, and
-     * faded out as {@code c / (c + c_floor)} when the ion is all but gone (c_floor a millionth of the bath's
-     * most concentrated species), so that it stays a smooth function of the state there.
+     * its net deposition current over its limiting current, 0 where the metal does not deposit (while shorted,
+     * without a target, or where the deposit redissolves). Not the cathodic branch alone: for a metal with a
+     * high exchange current density (Ag, Pb, Sn) both branches are far larger than the net current near its
+     * equilibrium potential. Faded out as {@code c / (c + c_floor)} when the ion is all but gone (c_floor a
+     * millionth of the bath's most concentrated species), so that it stays a smooth function of the state
+     * where the ion comes and goes at round-off level (events watching it would otherwise chatter).
      */
     double targetLimitRatio() {
         int k = net.targetSlot;
@@ -245,7 +248,7 @@ final class OperatingPoint {
             double ion = c[s.oxIndex()[0]];
             fade = ion / (ion + limitFloorMolPerM3);
         }
-        return Math.max(0, -cathodeI[k] * cathode.invIlC[k]) * fade;
+        return Math.max(0, -cathodeI[k]) * cathode.invIlC[k] * fade;
     }
 
     /** End of the integration segment under way (s): at its end the set value is the left limit. */

@@ -28,7 +28,7 @@ final class ReportFixture {
         }
     }
 
-    /** @return the tin scenario: graphite anode in a chloride bath, 1.5 A until Sn2+ falls to 3 g/L */
+    /** @return the tin scenario: graphite anode in a chloride bath, 2 A for 6 h */
     static synchronized RunResult tin() {
         if (tin == null) {
             tin = run("tin-stripping-liquor.toml");

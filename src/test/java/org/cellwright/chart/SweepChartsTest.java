@@ -33,7 +33,8 @@ class SweepChartsTest {
     /** A summary whose only meaningful figure is the specific energy (J/kg). */
     static RunSummary summary(double specificJPerKg) {
         return new RunSummary("end", 3600, 1e4, Map.of("Cu", 1e-3), Map.of("Cu", 1.0), "Cu", 0.9, 1e5,
-                specificJPerKg, 2, 2, 2, 2, Map.of(), Map.of(), null, null, null, 298, 298, 298, Map.of(), List.of());
+                specificJPerKg, 2, 2, 2, 2, Map.of(), Map.of(), null, null, null, 298, 298, 298, Map.of(), List.of(), Map.of(),
+                Map.of());
     }
 
     private static SweepAxis axis(String key, String unit, double... numbers) {

@@ -34,7 +34,7 @@ class TinScenariosTest {
 
     @Test
     void strippingLiquorLosesEfficiencyAsSn2DepletesAndSn4Builds() throws Exception {
-        RunResult r = run("tin-stripping-liquor.toml");
+        RunResult r = run("tin-shuttle-efficiency.toml");
         int sn2 = r.speciesNames().indexOf("Sn2+");
         int sn4 = r.speciesNames().indexOf("Sn4+");
         List<TracePoint> t = r.trace();
@@ -59,7 +59,7 @@ class TinScenariosTest {
     @Test
     void dilutedLiquorGivesSpongeAtTheSameCurrent() throws Exception {
         RunResult dilute = run("tin-dilute-sponge.toml");
-        RunResult liquor = run("tin-stripping-liquor.toml");
+        RunResult liquor = run("tin-shuttle-efficiency.toml");
         for (TracePoint p : dilute.trace().subList(1, dilute.trace().size())) {
             assertEquals("powdery", p.state().morphology(), "sponge at " + p.timeS());
         }
@@ -94,13 +94,13 @@ class TinScenariosTest {
         assertTrue(r.events().stream().anyMatch(e -> e.kind() == RunEvent.Kind.SHORT_CIRCUIT));
         assertTrue(r.summary().warnings().get(0).startsWith("Short circuit: at "), r.summary().warnings().toString());
         // the same liquor with the 40 mm gap does not short within its run
-        assertNull(run("tin-stripping-liquor.toml").summary().shortCircuitS());
+        assertNull(run("tin-shuttle-efficiency.toml").summary().shortCircuitS());
     }
 
     @Test
     void aMembraneAndAFerrousAnolyteKeepTheAnodesOxidantsAwayFromTheCathode() throws Exception {
         RunResult divided = run("tin-divided-cell.toml");
-        RunResult undivided = run("tin-stripping-liquor.toml");
+        RunResult undivided = run("tin-shuttle-efficiency.toml");
         // the catholyte (the same liquor, the same volume) never sees Sn4+ or Fe3+
         assertEquals(0, divided.summary().finalConcentrationMolPerM3().get("Sn4+"), 1e-6);
         assertEquals(0, divided.summary().finalConcentrationMolPerM3().getOrDefault("Fe3+", 0.0), 1e-6);

@@ -37,7 +37,7 @@ class ChartReadoutTest {
 
     @Test
     void tooltipsGiveValuesWithUnitsAndWhereTheyComeFrom() {
-        TracePoint p = TinRun.run().trace().get(30);
+        TracePoint p = TinRun.run().trace().get(60);
         String conc = ChartReadout.text(ChartReadout.Chart.COMPOSITION, p, TinRun.run().speciesNames(),
                 TinRun.run().metalSymbols(), 0.03);
         assertTrue(conc.contains("at 1 h 0 min"), conc);

@@ -48,13 +48,13 @@ class ScenarioDraftTest {
     @Test
     void fieldsKeepTheUsersNotation() throws Exception {
         ScenarioDraft d = tin();
-        assertEquals("1.5 A/dm2", d.get(FormFields.SUPPLY_VALUE));
+        assertEquals("2 A/dm2", d.get(FormFields.SUPPLY_VALUE));
         assertEquals(SupplyKind.CURRENT_DENSITY, d.supplyKind());
-        assertEquals("40 mm", d.get("cell.gap"));
+        assertEquals("30 mm", d.get("cell.gap"));
         assertEquals("Sn2+ < 3 g/L", d.get(FormFields.STOPS));
         assertEquals(new ScenarioDraft.Row("Sn2+", "25 g/L"), d.composition().get(0));
         String text = DraftToml.write(d).text();
-        assertTrue(text.contains("current_density = \"1.5 A/dm2\""), text);
+        assertTrue(text.contains("current_density = \"2 A/dm2\""), text);
         assertTrue(text.contains("\"Sn2+\" = \"25 g/L\""), text);
     }
 
@@ -108,7 +108,7 @@ class ScenarioDraftTest {
 
     @Test
     void partsTheFormHasNoFieldForAreKept() throws Exception {
-        String text = ScenarioTemplate.defaultTemplate().text().replace("[supply]\ncurrent_density = \"1.5 A/dm2\"",
+        String text = ScenarioTemplate.defaultTemplate().text().replace("[supply]\ncurrent_density = \"2 A/dm2\"",
                 "[supply]\nschedule = [ { at = \"0 h\", current = \"2 A\" }, { at = \"1 h\", current = \"1.5 A\", ramp = true } ]")
                 + "\n[species.\"Sn2+\"]\ndiffusion = \"0.8e-9 m2/s\"\n";
         ScenarioDraft d = ScenarioDraft.parse(text, "s.toml");

@@ -27,7 +27,7 @@ class ScenarioFormTest {
             assertEquals(0, form.problemsShown(), "the default scenario is clean");
             assertEquals(0, edits.get(), "showing a draft is not an edit");
             JTextComponent gap = form.field("cell.gap").orElseThrow();
-            assertEquals("40 mm", gap.getText());
+            assertEquals("30 mm", gap.getText());
             gap.setText("30 mmm");
             assertEquals("30 mmm", form.draft().get("cell.gap"));
             assertTrue(edits.get() > 0);

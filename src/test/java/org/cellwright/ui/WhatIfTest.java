@@ -12,7 +12,7 @@ import org.cellwright.cell.Scenario;
 import org.cellwright.io.UnitException;
 import org.junit.jupiter.api.Test;
 
-/** The what-if sliders on the tin scenario: 1.5 A/dm2 on 1 dm2, gap 40 mm, Sn2+ 25 g/L, 25 C, gently stirred. */
+/** The what-if sliders on the tin scenario: 2 A/dm2 on 1 dm2, gap 30 mm, Sn2+ 25 g/L, 25 C, still bath. */
 class WhatIfTest {
 
     private final Scenario tin = TinRun.scenario();
@@ -21,13 +21,13 @@ class WhatIfTest {
     @Test
     void readsTheScenariosValuesInTheSlidersUnits() {
         // source: the scenario file; 1 A/dm2 = 100 A/m2 (docs/scenario-format.md)
-        assertEquals(1.5, w.value(Knob.SUPPLY, tin), 1e-12);
-        assertEquals(40.0, w.value(Knob.GAP, tin), 1e-12);
+        assertEquals(2.0, w.value(Knob.SUPPLY, tin), 1e-12);
+        assertEquals(30.0, w.value(Knob.GAP, tin), 1e-12);
         // 25 g/L given, converted to mol/m3 with 118.71 g/mol and back
         assertEquals(25.0, w.value(Knob.CONCENTRATION, tin), 1e-9);
         assertEquals(25.0, w.value(Knob.TEMPERATURE, tin), 1e-9);
-        // source: AgitationPreset GENTLE, 100 um
-        assertEquals(100.0, w.value(Knob.AGITATION, tin), 1e-9);
+        // source: AgitationPreset STILL, 300 um
+        assertEquals(300.0, w.value(Knob.AGITATION, tin), 1e-9);
         for (Knob k : Knob.values()) {
             assertTrue(w.scale(k).covers(w.value(k, tin)), k + " scale covers the loaded value");
         }
@@ -92,6 +92,6 @@ class WhatIfTest {
 
     @Test
     void describesARunByItsSliderValues() {
-        assertEquals("1.5 A/dm2, gap 40 mm, Sn2+ 25 g/L, 25 C, layer 100 um", WhatIf.describe(tin, TinRun.lib(), "Sn2+"));
+        assertEquals("2 A/dm2, gap 30 mm, Sn2+ 25 g/L, 25 C, layer 300 um", WhatIf.describe(tin, TinRun.lib(), "Sn2+"));
     }
 }
