@@ -160,7 +160,7 @@ class ConductivityTest {
         return m;
     }
 
-    private static double modelMSPerCm(Point p) {
+    static double modelMSPerCm(Point p) {
         return Conductivity.of(LIB, composition(p.solution(), p.molPerL()), p.tempK()) * 10;
     }
 
@@ -226,7 +226,7 @@ class ConductivityTest {
         assertEquals(0.621, 100 * 0.020 / kappa, 0.621 * 0.10);
     }
 
-    private static double sulfateBath(String metal, double metalMolPerL, double acidMolPerL, double celsius) {
+    static double sulfateBath(String metal, double metalMolPerL, double acidMolPerL, double celsius) {
         Map<String, Double> m = new LinkedHashMap<>();
         m.put(metal, metalMolPerL * 1000);
         m.put("SO4^2-", (metalMolPerL + acidMolPerL) * 1000);
