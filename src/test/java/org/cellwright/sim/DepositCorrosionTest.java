@@ -34,7 +34,7 @@ class DepositCorrosionTest {
      * mass-transfer limit a few tens of millivolts from tin's equilibrium potential: the test isolates mass
      * transfer (with 1 A/m2 the reduction there is under mixed control, 89 % of the limit).
      */
-    private static Scenario tinThen(double laterAmps) {
+    static Scenario tinThen(double laterAmps) {
         Map<String, Double> c = new LinkedHashMap<>();
         c.put("Sn2+", 200.0);
         c.put("Sn4+", 15.0);

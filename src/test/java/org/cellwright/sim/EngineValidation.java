@@ -32,6 +32,7 @@ public final class EngineValidation {
         batchReactor(out);
         galvanostatic(out);
         coDeposition(out);
+        corrosion(out);
         hydrogen(out);
         return out;
     }
@@ -158,6 +159,20 @@ public final class EngineValidation {
                 "Trinidad, Walsh & Gilroy 1998 (batch reactor at the mass-transfer limit)", "mol/m3",
                 0.5 * Math.exp(-km * area * 4 * 3600 / volume),
                 DepositScenarios.at(r, 4 * 3600).state().concentrationsMolPerM3()[ag], 0.005, 4));
+    }
+
+    private static void corrosion(List<ValidationCase> out) {
+        RunResult r = CellSimulation.withDefaults().run(DepositCorrosionTest.tinThen(0.0), TestChemistry.library(10),
+                null);
+        int sn4 = r.speciesNames().indexOf("Sn4+");
+        double c1 = DepositScenarios.at(r, 2100).state().concentrationsMolPerM3()[sn4];
+        // source: at open circuit Sn4+ + Sn = 2 Sn2+ at the mass-transfer limit of Sn4+ (mixed-potential theory,
+        // Wagner & Traud, Z. Elektrochem. 44 (1938) 391), so Sn4+ follows c1 exp(-km A t / V) (Trinidad, Walsh &
+        // Gilroy 1998): km 1.2e-5 m/s, A 1 dm2, V 0.5 L, 40 min after the supply stops. 0.5 % (DepositCorrosionTest)
+        out.add(ValidationCase.relative("Corrosion", "Sn4+ dissolving a tin deposit at open circuit, 40 min",
+                "Wagner & Traud 1938 with the batch-reactor law (Trinidad, Walsh & Gilroy 1998)", "mol/m3",
+                c1 * Math.exp(-0.6e-9 / 50e-6 * 0.01 * 2400 / 0.0005),
+                DepositScenarios.at(r, 4500).state().concentrationsMolPerM3()[sn4], 0.005, 4));
     }
 
     private static void hydrogen(List<ValidationCase> out) {

@@ -3,7 +3,7 @@ package org.cellwright.validation;
 import java.util.ArrayList;
 import java.util.List;
 
-import org.cellwright.chem.ConductivityValidation;
+import org.cellwright.chem.ChemistryValidation;
 import org.cellwright.sim.EngineValidation;
 import org.cellwright.sim.deposit.DendriteValidation;
 import org.cellwright.study.StrdValidation;
@@ -25,7 +25,7 @@ public final class ValidationCatalogue {
             List<ValidationCase> out = new ArrayList<>();
             out.addAll(EngineValidation.cases());
             out.addAll(DendriteValidation.cases());
-            out.addAll(ConductivityValidation.cases());
+            out.addAll(ChemistryValidation.cases());
             out.addAll(StrdValidation.cases());
             out.addAll(TankhouseValidation.cases());
             cases = List.copyOf(out);
