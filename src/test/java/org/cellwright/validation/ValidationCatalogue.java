@@ -4,6 +4,7 @@ import java.util.ArrayList;
 import java.util.List;
 
 import org.cellwright.chem.ChemistryValidation;
+import org.cellwright.io.UnitValidation;
 import org.cellwright.sim.EngineValidation;
 import org.cellwright.sim.deposit.DendriteValidation;
 import org.cellwright.study.StrdValidation;
@@ -27,6 +28,7 @@ public final class ValidationCatalogue {
             out.addAll(DendriteValidation.cases());
             out.addAll(ChemistryValidation.cases());
             out.addAll(StrdValidation.cases());
+            out.addAll(UnitValidation.cases());
             out.addAll(TankhouseValidation.cases());
             cases = List.copyOf(out);
         }
