@@ -3,6 +3,8 @@ package org.cellwright.validation;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
+import java.util.Map;
+import java.util.concurrent.ConcurrentHashMap;
 
 import org.cellwright.chem.ChemLibrary;
 import org.cellwright.io.LibraryReader;
@@ -20,22 +22,26 @@ import org.cellwright.sim.RunSummary;
 public final class TankhouseValidation {
 
     private static final double J_PER_KWH = 3.6e6;
+    /** Runs of the shipped files, made once per test run (the engine is deterministic). */
+    private static final Map<String, RunResult> RUNS = new ConcurrentHashMap<>();
 
     private TankhouseValidation() {
     }
 
     /**
      * @param file a scenario file name in scenarios/
-     * @return its run with the built-in library
+     * @return its run with the built-in library (made once, then shared)
      */
     public static RunResult run(String file) {
-        ChemLibrary lib = LibraryReader.builtIn();
-        try {
-            return CellSimulation.withDefaults().run(new ScenarioReader(lib).read(Path.of("scenarios", file)), lib,
-                    null);
-        } catch (ScenarioException e) {
-            throw new IllegalStateException(file + ": " + e.getMessage(), e);
-        }
+        return RUNS.computeIfAbsent(file, f -> {
+            ChemLibrary lib = LibraryReader.builtIn();
+            try {
+                return CellSimulation.withDefaults().run(new ScenarioReader(lib).read(Path.of("scenarios", f)), lib,
+                        null);
+            } catch (ScenarioException e) {
+                throw new IllegalStateException(f + ": " + e.getMessage(), e);
+            }
+        });
     }
 
     /** @return the tankhouse cases, freshly computed */
