@@ -53,4 +53,14 @@ class TankhouseScenariosTest {
         assertEquals(1 - s.currentEfficiency(), hydrogen, 1e-3, q.toString());
         assertEquals(1.0, share(s, "anode:O2/H2O"), 1e-9);
     }
+
+    @Test
+    void hydrogenIsCautionedWhereItMattersNotForTracesOnCopper() {
+        // copper winning: millilitres of hydrogen over 7200 A h (well under 0.1 % of the charge) are no hazard
+        RunSummary copper = TankhouseValidation.run("copper-electrowinning.toml").summary();
+        assertFalse(copper.warnings().stream().anyMatch(w -> w.startsWith("Hydrogen")), copper.warnings().toString());
+        // zinc winning: about a tenth of the charge makes hydrogen; the caution shows
+        RunSummary zinc = TankhouseValidation.run("zinc-electrowinning.toml").summary();
+        assertTrue(zinc.warnings().stream().anyMatch(w -> w.startsWith("Hydrogen")), zinc.warnings().toString());
+    }
 }
