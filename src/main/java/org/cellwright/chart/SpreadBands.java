@@ -81,6 +81,42 @@ public final class SpreadBands {
         }
     }
 
+    /**
+     * Takes the bands off the charts again (their datasets, the voltage chart's polygon and the notes); does
+     * nothing to charts without bands.
+     *
+     * @param charts the charts
+     */
+    public static void remove(RunCharts charts) {
+        for (JFreeChart chart : charts.all()) {
+            XYPlot plot = chart.getXYPlot();
+            if (plot.getDataset(BANDS) != null) {
+                plot.setDataset(BANDS, null);
+            }
+            if (plot.getDataset(EFFICIENCY_BANDS) != null) {
+                plot.setDataset(EFFICIENCY_BANDS, null);
+            }
+            for (Object a : new java.util.ArrayList<>(plot.getAnnotations())) {
+                if (a instanceof XYPolygonAnnotation p && NOTE.equals(p.getToolTipText())) {
+                    plot.removeAnnotation(p);
+                }
+            }
+            for (int i = chart.getSubtitleCount() - 1; i >= 0; i--) {
+                if (chart.getSubtitle(i) instanceof TextTitle t && t.getText().startsWith(NOTE)) {
+                    chart.removeSubtitle(t);
+                }
+            }
+        }
+    }
+
+    /**
+     * @param charts the charts
+     * @return true when they show bands now
+     */
+    public static boolean shown(RunCharts charts) {
+        return charts.concentrations().getXYPlot().getDataset(BANDS) != null;
+    }
+
     /** Draws a band as a translucent polygon over everything on the plot (replacing an earlier one). */
     private static void overlay(JFreeChart chart, YIntervalSeries band, Color colour) {
         XYPlot plot = chart.getXYPlot();
