@@ -75,7 +75,7 @@ public final class SpreadBands {
                     chart.removeSubtitle(t);
                 }
             }
-            TextTitle note = new TextTitle(NOTE + samples + " samples of the uncertain inputs", style.font(10f, false));
+            TextTitle note = new TextTitle(NOTE + samples + " samples", style.font(10f, false));
             note.setPaint(style.mutedText());
             chart.addSubtitle(note);
         }

@@ -106,6 +106,7 @@ final class PlanChart {
         NumberAxis time = new NumberAxis(scale.axisLabel());
         time.setRange(0, scale.fromSeconds(p.durationS()) * 1.02);
         NumberAxis amps = new NumberAxis("current (A)");
+        amps.setRange(0, top(p, lines.getSeries(0)));
         XYStepRenderer stepRenderer = new XYStepRenderer();
         XYLineAndShapeRenderer lineRenderer = new XYLineAndShapeRenderer(true, false);
         XYPlot plot = new XYPlot(stepData, time, amps, stepRenderer);
@@ -116,10 +117,11 @@ final class PlanChart {
         style.apply(chart);
         stepRenderer.setSeriesPaint(0, style.series(1));
         stepRenderer.setSeriesStroke(0, new BasicStroke(2.6f));
-        lineRenderer.setSeriesPaint(0, style.text());
-        lineRenderer.setSeriesStroke(0, new BasicStroke(1.4f));
-        lineRenderer.setSeriesPaint(1, style.limit());
-        lineRenderer.setSeriesStroke(1, new BasicStroke(1.6f, BasicStroke.CAP_BUTT, BasicStroke.JOIN_MITER, 10,
+        // the limiting current thin and muted, the allowed share of it dashed in the text colour
+        lineRenderer.setSeriesPaint(0, style.mutedText());
+        lineRenderer.setSeriesStroke(0, new BasicStroke(1.2f));
+        lineRenderer.setSeriesPaint(1, style.text());
+        lineRenderer.setSeriesStroke(1, new BasicStroke(1.4f, BasicStroke.CAP_BUTT, BasicStroke.JOIN_MITER, 10,
                 new float[] {6, 4}, 0));
         lineRenderer.setSeriesPaint(2, style.series(0));
         lineRenderer.setSeriesStroke(2, new BasicStroke(1.4f));
@@ -134,6 +136,25 @@ final class PlanChart {
         sub.setPaint(style.mutedText());
         chart.addSubtitle(0, sub);
         return chart;
+    }
+
+    /**
+     * @return the top of the current axis: a fifth above the highest step and the limiting current, leaving
+     *     out the first minutes, where the limiting current is far higher while the diffusion layer grows to
+     *     its steady thickness (drawn, but off the top)
+     */
+    static double top(SchedulePlan p, XYSeries limit) {
+        double high = p.steps().stream().mapToDouble(SetPoint::value).max().orElse(1);
+        double[] values = new double[limit.getItemCount()];
+        for (int i = 0; i < values.length; i++) {
+            values[i] = limit.getY(i).doubleValue();
+        }
+        java.util.Arrays.sort(values);
+        if (values.length > 0) {
+            // the 90th percentile: past the transient of the first tenth of the run
+            high = Math.max(high, values[(int) Math.floor(0.9 * (values.length - 1))]);
+        }
+        return 1.2 * high;
     }
 
     /** @return the plan in one line: its time, and the constant current it beats */

@@ -63,7 +63,15 @@ final class PlanView extends JDialog {
     private final JButton applyButton = new JButton("Apply to the form and run");
     private final JButton saveButton = new JButton("Save as scenario...");
     private final JProgressBar bar = new JProgressBar();
-    private final JLabel message = new JLabel(" ");
+    private String messageKey = "muted.foreground";
+    private final WrapText message = new WrapText(" ", null, 0, java.awt.Font.PLAIN, 940) {
+        private static final long serialVersionUID = 1L;
+
+        @Override
+        protected String colourKey() {
+            return messageKey;
+        }
+    };
     private final JPanel chartHolder = new JPanel(new BorderLayout());
     private final DefaultTableModel table = new DefaultTableModel(new Object[] {"step", "from", "to", "current",
         "share of i_L at end", "deposit at end"}, 0) {
@@ -117,6 +125,7 @@ final class PlanView extends JDialog {
         north.setBorder(BorderFactory.createEmptyBorder(6, 6, 0, 6));
         north.add(inputs, BorderLayout.NORTH);
         message.setBorder(BorderFactory.createEmptyBorder(2, 8, 2, 8));
+        message.setOpaque(false);
         north.add(message, BorderLayout.CENTER);
         north.add(actions, BorderLayout.SOUTH);
 
@@ -219,7 +228,6 @@ final class PlanView extends JDialog {
         }
         say(String.format(Locale.ROOT, "%s. Planned with %d runs in %.1f s.%s", PlanChart.summary(p), p.runs(), took,
                 notes.isEmpty() ? "" : " Note: " + String.join("; ", notes) + "."));
-        message.setToolTipText("<html>" + String.join("<br>", notes) + "</html>");
     }
 
     private void failed(Throwable t) {
@@ -271,13 +279,15 @@ final class PlanView extends JDialog {
     }
 
     private void say(String text) {
-        message.setForeground(null);
-        message.setText(text);
+        messageKey = "muted.foreground";
+        message.show(text);
+        message.repaint();
     }
 
     private void fail(String text) {
-        message.setForeground(UiTheme.color("error.foreground"));
-        message.setText(text);
+        messageKey = "error.foreground";
+        message.show(text);
+        message.repaint();
     }
 
     /** @return the plan shown, or null */

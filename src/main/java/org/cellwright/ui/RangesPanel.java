@@ -133,6 +133,9 @@ final class RangesPanel extends JPanel {
         }
         revalidate();
         repaint();
+        // bring the ranges into view in the summary's scroll pane
+        javax.swing.SwingUtilities.invokeLater(() -> scrollRectToVisible(new java.awt.Rectangle(0, 0, getWidth(),
+                getHeight())));
     }
 
     /**
