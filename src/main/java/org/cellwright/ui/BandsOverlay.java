@@ -152,9 +152,10 @@ final class BandsOverlay {
                 continue;
             }
             Range r = axis.getRange();
-            for (int i = 0; i < plot.getDatasetCount(); i++) {
-                XYDataset d = plot.getDataset(i);
-                if (d != null && plot.getRangeAxisForDataset(i) == axis) {
+            // datasets sit at chosen indices (the bands at 5), so go through the map, not 0..count-1
+            for (java.util.Map.Entry<Integer, XYDataset> e : plot.getDatasets().entrySet()) {
+                XYDataset d = e.getValue();
+                if (d != null && plot.getRangeAxisForDataset(e.getKey()) == axis) {
                     Range b = DatasetUtils.findRangeBounds(d, true);
                     if (b != null) {
                         r = Range.combine(r, b);

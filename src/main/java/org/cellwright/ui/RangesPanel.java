@@ -85,6 +85,11 @@ final class RangesPanel extends JPanel {
         return (Integer) samples.getValue();
     }
 
+    /** @param n how many samples to draw next time */
+    void setSamples(int n) {
+        samples.setValue(n);
+    }
+
     /** @return the progress bar the study reports to */
     JProgressBar bar() {
         return bar;
