@@ -24,9 +24,9 @@ import org.jfree.data.xy.YIntervalSeriesCollection;
 public final class SpreadBands {
 
     /** Dataset index of the bands on each plot (behind the run's own datasets 0-3). */
-    static final int BANDS = 5;
+    public static final int BANDS = 5;
     /** Dataset index of the efficiency bands, on the current chart's second axis. */
-    static final int EFFICIENCY_BANDS = 6;
+    public static final int EFFICIENCY_BANDS = 6;
     /** The start of the note under each chart title. */
     static final String NOTE = "shaded: 5-95 % of ";
     /** Opacity of a band. */

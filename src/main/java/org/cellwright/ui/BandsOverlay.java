@@ -152,10 +152,9 @@ final class BandsOverlay {
                 continue;
             }
             Range r = axis.getRange();
-            // datasets sit at chosen indices (the bands at 5), so go through the map, not 0..count-1
-            for (java.util.Map.Entry<Integer, XYDataset> e : plot.getDatasets().entrySet()) {
-                XYDataset d = e.getValue();
-                if (d != null && plot.getRangeAxisForDataset(e.getKey()) == axis) {
+            for (int i : new int[] {SpreadBands.BANDS, SpreadBands.EFFICIENCY_BANDS}) {
+                XYDataset d = plot.getDataset(i);
+                if (d != null && plot.getRangeAxisForDataset(i) == axis) {
                     Range b = DatasetUtils.findRangeBounds(d, true);
                     if (b != null) {
                         r = Range.combine(r, b);

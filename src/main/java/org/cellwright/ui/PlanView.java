@@ -206,15 +206,7 @@ final class PlanView extends JDialog {
         cancelButton.setEnabled(false);
         applyButton.setEnabled(true);
         saveButton.setEnabled(true);
-        chartHolder.removeAll();
-        ChartPanel cp = new ChartPanel(PlanChart.of(p, ChartStyle.of(host.dark())), 600, 400, 200, 150, 4096, 4096,
-                true, false, true, false, false, true, true);
-        cp.setMouseWheelEnabled(false);
-        cp.setDomainZoomable(false);
-        cp.setRangeZoomable(false);
-        chartHolder.add(cp, BorderLayout.CENTER);
-        chartHolder.revalidate();
-        chartHolder.repaint();
+        drawChart();
         table.setRowCount(0);
         int k = 1;
         for (SchedulePlan.Step st : p.table()) {
@@ -228,6 +220,22 @@ final class PlanView extends JDialog {
         }
         say(String.format(Locale.ROOT, "%s. Planned with %d runs in %.1f s.%s", PlanChart.summary(p), p.runs(), took,
                 notes.isEmpty() ? "" : " Note: " + String.join("; ", notes) + "."));
+    }
+
+    /** Draws the plan's chart (again, after the look switched). */
+    void drawChart() {
+        if (plan == null) {
+            return;
+        }
+        chartHolder.removeAll();
+        ChartPanel cp = new ChartPanel(PlanChart.of(plan, ChartStyle.of(host.dark())), 600, 400, 200, 150, 4096, 4096,
+                true, false, true, false, false, true, true);
+        cp.setMouseWheelEnabled(false);
+        cp.setDomainZoomable(false);
+        cp.setRangeZoomable(false);
+        chartHolder.add(cp, BorderLayout.CENTER);
+        chartHolder.revalidate();
+        chartHolder.repaint();
     }
 
     private void failed(Throwable t) {

@@ -131,6 +131,7 @@ final class RangesPanel extends JPanel {
                     + num(f.toDisplay(p.p50())) + ")";
             JLabel name = new JLabel(f.description() + ", " + f.displayUnit());
             name.setForeground(UiTheme.color("muted.foreground"));
+            name.setToolTipText(f.label());
             rows.add(name, cell(row, 0));
             rows.add(new JLabel(nominal), cell(row, 1));
             rows.add(new JLabel(range), cell(row++, 2));

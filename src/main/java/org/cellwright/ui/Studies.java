@@ -54,8 +54,13 @@ final class Studies implements StudyHost {
         bandsItem.setMnemonic(KeyEvent.VK_U);
         bandsItem.addActionListener(e -> toggleBands(bandsItem.isSelected()));
         PropertyChangeListener restyle = e -> {
-            if ("lookAndFeel".equals(e.getPropertyName()) && sweep != null) {
-                sweep.redraw();
+            if ("lookAndFeel".equals(e.getPropertyName())) {
+                if (sweep != null) {
+                    sweep.redraw();
+                }
+                if (plan != null) {
+                    plan.drawChart();
+                }
             }
         };
         UIManager.addPropertyChangeListener(restyle);
