@@ -1,5 +1,8 @@
 package org.cellwright.ui;
 
+import java.awt.Shape;
+import java.awt.geom.Ellipse2D;
+import java.awt.geom.Rectangle2D;
 import java.util.ArrayList;
 import java.util.List;
 
@@ -8,9 +11,12 @@ import org.cellwright.chem.ChemLibrary;
 import org.cellwright.io.ScenarioException;
 import org.cellwright.io.ScenarioWriter;
 import org.cellwright.study.AxisValue;
+import org.cellwright.study.SummaryFigure;
 import org.cellwright.study.SweepAxis;
 import org.cellwright.study.SweepPoint;
 import org.cellwright.study.SweepResult;
+import org.jfree.chart.plot.XYPlot;
+import org.jfree.chart.renderer.xy.XYBlockRenderer;
 import org.jfree.data.xy.XYDataset;
 
 /**
@@ -66,6 +72,50 @@ final class SweepPick {
             parts.add(axes.get(a).key() + " = " + p.point().values().get(a).text());
         }
         return String.join(", ", parts);
+    }
+
+    /**
+     * @param plot the sweep chart's plot
+     * @param r the sweep it shows
+     * @param p a point of it
+     * @return in data coordinates, the outline of the point's cell (heat map), or a small ring around its
+     *     marker (line)
+     */
+    static Shape outline(XYPlot plot, SweepResult r, SweepPoint p) {
+        XYDataset data = plot.getDataset();
+        int item = p.point().index();
+        if (r.axes().size() == 1) {
+            for (int i = 0; i < data.getItemCount(0); i++) {
+                if (at(r, data, 0, i) == p) {
+                    item = i;
+                }
+            }
+        }
+        double x = data.getXValue(0, item);
+        double y = data.getYValue(0, item);
+        if (plot.getRenderer() instanceof XYBlockRenderer b) {
+            return new Rectangle2D.Double(x - b.getBlockWidth() / 2, y - b.getBlockHeight() / 2, b.getBlockWidth(),
+                    b.getBlockHeight());
+        }
+        double w = plot.getDomainAxis().getRange().getLength() / 60;
+        double h = plot.getRangeAxis().getRange().getLength() / 40;
+        return new Ellipse2D.Double(x - w, y - h, 2 * w, 2 * h);
+    }
+
+    /**
+     * @param r the sweep
+     * @param f the figure shown
+     * @param p the point under the mouse, or null
+     * @return the tooltip: the point's values, its figure with unit (or why it has none), and what a click does
+     */
+    static String tooltip(SweepResult r, SummaryFigure f, SweepPoint p) {
+        if (p == null) {
+            return null;
+        }
+        double v = f.toDisplay(p.si(f));
+        return "<html>" + describe(p, r.axes()) + "<br>" + f.description() + ": "
+                + (Double.isFinite(v) ? SweepKeys.num(v) + " " + f.displayUnit() : "no value")
+                + (p.message() == null ? "" : "<br>" + p.message()) + "<br><i>click to load this run</i></html>";
     }
 
     /**

@@ -8,7 +8,6 @@ import java.awt.Font;
 import java.awt.GridBagConstraints;
 import java.awt.GridBagLayout;
 import java.awt.Insets;
-import java.awt.geom.Rectangle2D;
 import java.io.File;
 import java.io.IOException;
 import java.nio.file.Path;
@@ -20,18 +19,13 @@ import java.util.concurrent.CancellationException;
 import javax.swing.BorderFactory;
 import javax.swing.DefaultListCellRenderer;
 import javax.swing.JButton;
-import javax.swing.JCheckBox;
 import javax.swing.JComboBox;
-import javax.swing.JComponent;
 import javax.swing.JDialog;
 import javax.swing.JFileChooser;
 import javax.swing.JLabel;
 import javax.swing.JList;
 import javax.swing.JPanel;
 import javax.swing.JProgressBar;
-import javax.swing.JSpinner;
-import javax.swing.JTextField;
-import javax.swing.SpinnerNumberModel;
 import javax.swing.SwingConstants;
 import javax.swing.SwingWorker;
 import javax.swing.filechooser.FileNameExtensionFilter;
@@ -56,7 +50,6 @@ import org.jfree.chart.JFreeChart;
 import org.jfree.chart.annotations.XYShapeAnnotation;
 import org.jfree.chart.entity.XYItemEntity;
 import org.jfree.chart.plot.XYPlot;
-import org.jfree.chart.renderer.xy.XYBlockRenderer;
 
 /**
  * The sweep view: one or two scenario keys (the common ones offered with ranges around the scenario's values,
@@ -68,13 +61,12 @@ import org.jfree.chart.renderer.xy.XYBlockRenderer;
 final class SweepView extends JDialog {
 
     private static final long serialVersionUID = 1L;
-    private static final String ONE_KEY = "(none: vary one key)";
     /** Outline of the chosen cell: a rose that stands out on both ends of the heat scale (our own choice). */
     private static final java.awt.Color MARK = new java.awt.Color(0xD0, 0x2F, 0x6A);
 
     private final transient StudyHost host;
-    private final AxisRow across;
-    private final AxisRow up;
+    private final SweepAxisRow across;
+    private final SweepAxisRow up;
     private final JComboBox<SummaryFigure> figure = new JComboBox<>(SummaryFigure.values());
     private final JButton runButton = new JButton("Run sweep");
     private final JButton cancelButton = new JButton("Cancel");
@@ -92,8 +84,8 @@ final class SweepView extends JDialog {
     SweepView(StudyHost host) {
         super(host.frame(), "Sweep", false);
         this.host = host;
-        across = new AxisRow(false);
-        up = new AxisRow(true);
+        across = new SweepAxisRow(false);
+        up = new SweepAxisRow(true);
         figure.setRenderer(new DefaultListCellRenderer() {
             private static final long serialVersionUID = 1L;
 
@@ -242,16 +234,8 @@ final class SweepView extends JDialog {
         SummaryFigure f = (SummaryFigure) figure.getSelectedItem();
         JFreeChart chart = SweepCharts.of(result, f, host.scenarioName(), ChartStyle.of(host.dark()));
         XYPlot plot = chart.getXYPlot();
-        plot.getRenderer().setDefaultToolTipGenerator((data, series, item) -> {
-            SweepPoint p = SweepPick.at(result, data, series, item);
-            if (p == null) {
-                return null;
-            }
-            double v = f.toDisplay(p.si(f));
-            return "<html>" + SweepPick.describe(p, result.axes()) + "<br>" + f.description() + ": "
-                    + (Double.isFinite(v) ? SweepKeys.num(v) + " " + f.displayUnit() : "no value")
-                    + (p.message() == null ? "" : "<br>" + p.message()) + "<br><i>click to load this run</i></html>";
-        });
+        plot.getRenderer().setDefaultToolTipGenerator((data, series, item) ->
+                SweepPick.tooltip(result, f, SweepPick.at(result, data, series, item)));
         chartHolder.removeAll();
         chartPanel = new ChartPanel(chart, 600, 450, 200, 150, 4096, 4096, true, false, true, false, false, true, true);
         chartPanel.setMouseWheelEnabled(false);
@@ -300,29 +284,7 @@ final class SweepView extends JDialog {
     private void mark(SweepPoint p) {
         XYPlot plot = chartPanel.getChart().getXYPlot();
         plot.clearAnnotations();
-        int item = p.point().index();
-        double x = plot.getDataset().getXValue(0, result.axes().size() == 2 ? item : indexOnLine(p));
-        double y = plot.getDataset().getYValue(0, result.axes().size() == 2 ? item : indexOnLine(p));
-        java.awt.Shape s;
-        if (plot.getRenderer() instanceof XYBlockRenderer r) {
-            s = new Rectangle2D.Double(x - r.getBlockWidth() / 2, y - r.getBlockHeight() / 2, r.getBlockWidth(),
-                    r.getBlockHeight());
-        } else {
-            double w = plot.getDomainAxis().getRange().getLength() / 60;
-            double h = plot.getRangeAxis().getRange().getLength() / 40;
-            s = new java.awt.geom.Ellipse2D.Double(x - w, y - h, 2 * w, 2 * h);
-        }
-        plot.addAnnotation(new XYShapeAnnotation(s, new BasicStroke(2.5f), MARK, null));
-    }
-
-    private int indexOnLine(SweepPoint p) {
-        var data = chartPanel.getChart().getXYPlot().getDataset();
-        for (int i = 0; i < data.getItemCount(0); i++) {
-            if (SweepPick.at(result, data, 0, i) == p) {
-                return i;
-            }
-        }
-        return 0;
+        plot.addAnnotation(new XYShapeAnnotation(SweepPick.outline(plot, result, p), new BasicStroke(2.5f), MARK, null));
     }
 
     private void exportCsv() {
@@ -404,16 +366,17 @@ final class SweepView extends JDialog {
     }
 
     /** @return the first axis row (for tests and screenshots) */
-    AxisRow across() {
+    SweepAxisRow across() {
         return across;
     }
 
     /** @return the second axis row */
-    AxisRow up() {
+    SweepAxisRow up() {
         return up;
     }
 
-    private static GridBagConstraints at(int row, int col) {
+    /** @return the grid cell of a control in the controls' layout */
+    static GridBagConstraints at(int row, int col) {
         GridBagConstraints c = new GridBagConstraints();
         c.gridy = row;
         c.gridx = col;
@@ -422,94 +385,5 @@ final class SweepView extends JDialog {
         c.weightx = col == 1 ? 1 : 0;
         c.insets = new Insets(2, 0, 2, 8);
         return c;
-    }
-
-    /** One axis: the key (offered or typed), the ends with units, the number of values and the spacing. */
-    static final class AxisRow {
-        private final JComboBox<Object> key = new JComboBox<>();
-        private final JTextField from = new JTextField(9);
-        private final JTextField to = new JTextField(9);
-        private final JSpinner n = new JSpinner(new SpinnerNumberModel(SweepKeys.DEFAULT_N, 2, 100, 1));
-        private final JCheckBox log = new JCheckBox();
-        private final boolean optional;
-
-        AxisRow(boolean optional) {
-            this.optional = optional;
-            key.setEditable(true);
-            key.setToolTipText("<html>A common key, or type any scenario key as a dotted path<br>"
-                    + "(e.g. reaction.H+/H2.i0, electrolyte.composition.\"Cu2+\"); the ends take units</html>");
-            from.setToolTipText("First value with its unit (e.g. 10 mm, 0.5 A/dm2, 20 C)");
-            to.setToolTipText("Last value with its unit; a bare number takes the other end's unit");
-            n.setToolTipText("How many values, ends included");
-            log.setToolTipText("Space the values evenly on a log scale (both ends above zero)");
-            key.addActionListener(e -> {
-                if (key.getSelectedItem() instanceof SweepKeys.Choice c) {
-                    from.setText(c.from());
-                    to.setText(c.to());
-                    log.setSelected(c.log());
-                }
-                boolean on = !off();
-                from.setEnabled(on);
-                to.setEnabled(on);
-                n.setEnabled(on);
-                log.setEnabled(on);
-            });
-        }
-
-        void addTo(JPanel p, int row, String name) {
-            p.add(new JLabel(name), at(row, 0));
-            p.add(key, at(row, 1));
-            p.add(from, at(row, 2));
-            p.add(to, at(row, 3));
-            p.add(n, at(row, 4));
-            p.add(log, at(row, 5));
-        }
-
-        /** Offers keys, choosing the given one unless a key was already chosen. */
-        void offer(List<SweepKeys.Choice> keys, int chosen) {
-            Object was = key.getSelectedItem();
-            key.removeAllItems();
-            if (optional) {
-                key.addItem(ONE_KEY);
-            }
-            keys.forEach(key::addItem);
-            Object again = was instanceof SweepKeys.Choice c ? keys.stream().filter(k -> k.key().equals(c.key()))
-                    .findFirst().orElse(null) : was;
-            key.setSelectedItem(again != null ? again : keys.get(Math.min(chosen, keys.size() - 1)));
-        }
-
-        boolean off() {
-            return optional && ONE_KEY.equals(key.getSelectedItem());
-        }
-
-        /** Chooses a key and its range (as the user would). */
-        void set(String keyText, String fromText, String toText, int count, boolean logScale) {
-            Object match = null;
-            for (int i = 0; i < key.getItemCount(); i++) {
-                if (key.getItemAt(i) instanceof SweepKeys.Choice c && c.key().equals(keyText)) {
-                    match = c;
-                }
-            }
-            key.setSelectedItem(match != null ? match : keyText);
-            from.setText(fromText);
-            to.setText(toText);
-            n.setValue(count);
-            log.setSelected(logScale);
-        }
-
-        /** Turns the row off (one key only). */
-        void turnOff() {
-            key.setSelectedItem(ONE_KEY);
-        }
-
-        SweepAxis axis() {
-            Object k = key.getEditor().getItem();
-            String text = k instanceof SweepKeys.Choice c ? c.key() : k == null ? "" : k.toString();
-            return SweepKeys.axis(text, from.getText(), to.getText(), (Integer) n.getValue(), log.isSelected());
-        }
-
-        JComponent keyBox() {
-            return key;
-        }
     }
 }

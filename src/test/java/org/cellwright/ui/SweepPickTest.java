@@ -89,7 +89,9 @@ class SweepPickTest {
                 SweepKeys.axis("supply.current_density", "1 A/dm2", "3 A/dm2", 2, false));
         SweepResult r = sweep(base, axes);
         assertEquals(6, r.okCount());
-        XYDataset data = SweepCharts.of(r, SummaryFigure.EFFICIENCY, null, ChartStyle.light()).getXYPlot().getDataset();
+        org.jfree.chart.plot.XYPlot plot = SweepCharts.of(r, SummaryFigure.EFFICIENCY, null, ChartStyle.light())
+                .getXYPlot();
+        XYDataset data = plot.getDataset();
         assertEquals(6, data.getItemCount(0));
         for (int i = 0; i < 6; i++) {
             SweepPoint p = SweepPick.at(r, data, 0, i);
@@ -97,6 +99,12 @@ class SweepPickTest {
             // the cell drawn at (x, y) is the point with those values: gap in mm across, A/dm2 up
             assertEquals(p.point().values().get(0).number(), data.getXValue(0, i), 1e-9);
             assertEquals(p.point().values().get(1).number(), data.getYValue(0, i), 1e-9);
+            // the outline drawn round a chosen cell is that cell: 10 mm wide (20, 30, 40 mm), 2 A/dm2 high
+            java.awt.geom.Rectangle2D cell = SweepPick.outline(plot, r, p).getBounds2D();
+            assertEquals(p.point().values().get(0).number(), cell.getCenterX(), 1e-9);
+            assertEquals(p.point().values().get(1).number(), cell.getCenterY(), 1e-9);
+            assertEquals(10, cell.getWidth(), 1e-9);
+            assertEquals(2, cell.getHeight(), 1e-9);
             ScenarioDraft d = SweepPick.draftOf(base, p, axes, TinRun.lib(), "tin.toml");
             DraftCheck.Outcome o = DraftCheck.draft(d, TinRun.lib(), "tin.toml");
             assertEquals(p.scenario(), o.scenario(), "the form's draft reads back to the point's scenario");
