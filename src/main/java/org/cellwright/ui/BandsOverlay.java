@@ -62,6 +62,10 @@ final class BandsOverlay {
             task.stop();
         }
         clear(null);
+        if (director.result() == null) {
+            // nothing shown yet: show the nominal run whole, so the bands have their lines
+            director.replot(s, host.scenarioName(), System.nanoTime());
+        }
         int samples = panel.samples();
         panel.running(true);
         shownChanged.accept(true);
