@@ -41,6 +41,7 @@ public final class CellwrightWindow implements WindowActions.Commands {
     private final StatusBar status = new StatusBar();
     private final FileCommands files = new FileCommands(dialogs, status, () -> this.session, () -> this.director,
             () -> this.dark);
+    private final Studies studies = new Studies(frame, () -> this.session);
     private final boolean exitOnClose;
     private RunDirector director;
     private ScenarioSession session;
@@ -97,7 +98,9 @@ public final class CellwrightWindow implements WindowActions.Commands {
                 quit();
             }
         });
-        frame.setJMenuBar(actions.menuBar());
+        javax.swing.JMenuBar menus = actions.menuBar();
+        menus.add(studies.menu(), menus.getMenuCount() - 1);
+        frame.setJMenuBar(menus);
         actions.bind(frame.getRootPane());
         actions.refresh(null, false);
         JPanel loading = new JPanel(new BorderLayout(0, 10));
@@ -160,6 +163,7 @@ public final class CellwrightWindow implements WindowActions.Commands {
             }
         });
         session = new ScenarioSession(lib, form, knobs, director, status, this::titleChanged);
+        studies.attach(lib, director, form, summary, status);
         comparisonPanel = new ComparisonPanel(comparison, actions.pin, e -> director.setReference(e));
 
         JComponent all = WindowLayout.arrange(form, knobs, bar, grid, events, strip, tabs, summary, cautions,
@@ -216,6 +220,11 @@ public final class CellwrightWindow implements WindowActions.Commands {
     /** @return the sliders (for the smoke test) */
     KnobPanel knobs() {
         return knobs;
+    }
+
+    /** @return the studies: sweep, plan, bands (for the smoke test) */
+    Studies studies() {
+        return studies;
     }
 
     /** @return the status bar (for the smoke test) */
