@@ -47,8 +47,9 @@ echo "$OUT/run-sheet.png"
 $JAR sweep scenarios/gap-vs-voltage.toml --vary cell.gap=10mm:100mm:10 --figure voltage-mean \
   --out target/guide-gap.csv --chart "$OUT/sweep-gap.png" >/dev/null 2>&1
 echo "$OUT/sweep-gap.png"
-$JAR sweep scenarios/copper-etchant-bleed.toml --vary cell.gap=10mm:60mm:11 \
-  --vary supply.current_density="0.5:4 A/dm2:11" --out target/guide-grid.csv --chart "$OUT/sweep-grid.png" >/dev/null 2>&1
+$JAR sweep scenarios/copper-plating-rundown.toml --vary supply.current_density="1:4 A/dm2:7" \
+  --vary cell.agitation=still,gentle,sparged,stirred --figure efficiency \
+  --out target/guide-grid.csv --chart "$OUT/sweep-grid.png" >/dev/null 2>&1
 echo "$OUT/sweep-grid.png"
 $JAR run scenarios/tin-shuttle-efficiency.toml --spread 60 --seed 7 --chart "$OUT/spread-bands.png" >/dev/null 2>&1
 echo "$OUT/spread-bands.png"
