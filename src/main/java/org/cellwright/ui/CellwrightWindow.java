@@ -177,6 +177,10 @@ public final class CellwrightWindow implements WindowActions.Commands {
             status.fail("The default scenario does not read: " + e.getMessage());
         }
         refreshActions();
+        // start with the keyboard on the charts, not in the first form field: Space then plays the run and
+        // the title field is not selected whole (and scrolled to its end) by the look and feel
+        grid.setFocusable(true);
+        javax.swing.SwingUtilities.invokeLater(grid::requestFocusInWindow);
         ready = true;
     }
 
