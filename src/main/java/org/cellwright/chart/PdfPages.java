@@ -5,9 +5,12 @@ import java.awt.geom.Rectangle2D;
 import java.io.IOException;
 import java.util.ArrayList;
 import java.util.List;
+import java.util.logging.Level;
+import java.util.logging.Logger;
 
 import de.rototor.pdfbox.graphics2d.PdfBoxGraphics2D;
 import de.rototor.pdfbox.graphics2d.PdfBoxGraphics2DFontTextDrawerDefaultFonts;
+
 import org.apache.pdfbox.pdmodel.PDDocument;
 import org.apache.pdfbox.pdmodel.PDPage;
 import org.apache.pdfbox.pdmodel.PDPageContentStream;
@@ -27,6 +30,12 @@ import org.jfree.chart.ui.Drawable;
 final class PdfPages implements AutoCloseable {
 
     static final float MARGIN = 50;
+    /**
+     * PDFBox logs a warning (through java.util.logging) each time a standard font is drawn with a metric-
+     * compatible system font in its place: hundreds of lines on the user's terminal for one report. The
+     * substitution is intended, so only its errors are shown. Held here so the logger is not collected.
+     */
+    private static final Logger FONT_LOG = quietFontLog();
     static final PDFont REGULAR = new PDType1Font(Standard14Fonts.FontName.HELVETICA);
     static final PDFont BOLD = new PDType1Font(Standard14Fonts.FontName.HELVETICA_BOLD);
     static final PDFont ITALIC = new PDType1Font(Standard14Fonts.FontName.HELVETICA_OBLIQUE);
@@ -41,6 +50,12 @@ final class PdfPages implements AutoCloseable {
     }
 
     /** @return the usable width of a page (pt) */
+    private static Logger quietFontLog() {
+        Logger log = Logger.getLogger("org.apache.pdfbox.pdmodel.font");
+        log.setLevel(Level.SEVERE);
+        return log;
+    }
+
     static float width() {
         return PDRectangle.A4.getWidth() - 2 * MARGIN;
     }

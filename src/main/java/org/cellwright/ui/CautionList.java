@@ -14,8 +14,12 @@ import java.util.Set;
  */
 record CautionList(List<Caution> safety, List<Caution> notes) {
 
-    /** The topics that make a warning a safety caution (the hazards the engine checks for). */
-    static final Set<String> SAFETY_TOPICS = Set.of("Chlorine", "Hydrogen", "Acid", "Lead", "Electrical");
+    /**
+     * The topics that make a warning a safety caution (the hazards the engine checks for). A dendrite that
+     * shorted the cell is an electrical hazard (the leads carry the whole current), so it is one too.
+     */
+    static final Set<String> SAFETY_TOPICS = Set.of("Short circuit", "Chlorine", "Hydrogen", "Acid", "Lead",
+            "Electrical");
 
     /** Longest topic read before a colon (longer text before a colon is a sentence, not a topic). */
     private static final int MAX_TOPIC = 24;

@@ -82,7 +82,7 @@ final class EventLogPanel extends JScrollPane {
             for (RunEvent e : events) {
                 sb.append("<tr><td valign='top' nowrap><a style='color:").append(hex(accent))
                         .append(";text-decoration:none' href='t:").append(e.timeS()).append("'><b>")
-                        .append(RunClock.format(e.timeS())).append("</b></a></td><td valign='top'>")
+                        .append(RunClock.format(e.timeS())).append("</b></a></td><td valign='top' width='100%'>")
                         .append(FieldMessage.escape(e.message())).append("</td></tr>");
             }
             sb.append("</table>");

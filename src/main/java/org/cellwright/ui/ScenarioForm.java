@@ -244,6 +244,11 @@ final class ScenarioForm extends JPanel implements Scrollable {
         JTextComponent layerField = fields.get(FormFields.DIFFUSION_LAYER);
         if (layerField != null) {
             layerField.setEnabled(layer);
+            // the greyed field shows the chosen preset's thickness, not a made-up example
+            String hint = layer || sel == null ? FormFields.find(FormFields.DIFFUSION_LAYER).map(FieldSpec::example).orElse("")
+                    : AgitationPreset.find(sel.toString()).map(p -> Math.round(p.diffusionLayerM() * 1e6) + " um ("
+                    + p.key() + ")").orElse("");
+            layerField.putClientProperty("JTextField.placeholderText", hint);
         }
         if (quiet || sel == null) {
             return;

@@ -68,10 +68,10 @@ final class SummaryFigures {
                         + " growth at the end of the run."));
         out.add(new Figure("Deposit form", s.morphologyFinal() == null ? "not assessed" : s.morphologyFinal(),
                 "The deposit's likely form at the end, from how close the deposition runs to its limiting current."));
-        out.add(new Figure("Cell voltage", String.format(Locale.ROOT, "%.2f V mean (%.2f to %.2f V, max %.2f V)",
+        out.add(new Figure("Cell voltage", String.format(Locale.ROOT, "%.2f V mean (start %.2f V, end %.2f V, max %.2f V)",
                 s.cellVoltageMeanV(), s.cellVoltageStartV(), s.cellVoltageEndV(), s.cellVoltageMaxV()),
                 "Voltage at the supply terminals: time-averaged, at the start, at the end and the highest."));
-        out.add(new Figure("Temperature", String.format(Locale.ROOT, "%.1f to %.1f C (max %.1f C)",
+        out.add(new Figure("Temperature", String.format(Locale.ROOT, "start %.1f C, end %.1f C (max %.1f C)",
                 s.temperatureStartK() - 273.15, s.temperatureEndK() - 273.15, s.temperatureMaxK() - 273.15),
                 "Bath temperature from the heat balance: Joule and reaction heat against losses to the air."));
         out.add(new Figure("Charge", String.format(Locale.ROOT, "%.4g A h", s.chargeC() / 3600),

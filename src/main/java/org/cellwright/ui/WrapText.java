@@ -10,6 +10,7 @@ import java.awt.event.ComponentEvent;
 import javax.swing.BorderFactory;
 import javax.swing.JTextArea;
 import javax.swing.UIManager;
+import javax.swing.text.DefaultCaret;
 import javax.swing.text.View;
 
 /**
@@ -110,5 +111,10 @@ class WrapText extends JTextArea {
         }
         setOpaque(false);
         setBorder(BorderFactory.createEmptyBorder());
+        // new text must not move the caret and scroll the panel around it to the end (the Cautions tab
+        // would open on its last note instead of its first caution); a new look brings a new caret
+        if (getCaret() instanceof DefaultCaret caret) {
+            caret.setUpdatePolicy(DefaultCaret.NEVER_UPDATE);
+        }
     }
 }

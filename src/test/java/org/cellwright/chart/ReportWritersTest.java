@@ -74,6 +74,9 @@ class ReportWritersTest {
     void pdfLoadsAndItsTextCarriesTheCautionsAndFigures() throws Exception {
         ByteArrayOutputStream buf = new ByteArrayOutputStream();
         PdfReport.write(report, buf);
+        // the font substitution PDFBox warns of on every glyph run stays off the user's terminal
+        assertEquals(java.util.logging.Level.SEVERE,
+                java.util.logging.Logger.getLogger("org.apache.pdfbox.pdmodel.font").getLevel());
         try (PDDocument doc = Loader.loadPDF(buf.toByteArray())) {
             assertTrue(doc.getNumberOfPages() >= 2, "pages: " + doc.getNumberOfPages());
             String text = new PDFTextStripper().getText(doc).replaceAll("\\s+", " ");

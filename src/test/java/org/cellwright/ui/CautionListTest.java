@@ -25,11 +25,13 @@ class CautionListTest {
     void theTinRunTriggersChlorineHydrogenAndAcid() {
         List<String> warnings = TinRun.run().summary().warnings();
         CautionList l = CautionList.of(warnings);
-        // a graphite anode in a chloride bath gives chlorine; hydrogen at the cathode; 1.5 mol/L HCl
-        assertEquals(List.of("Chlorine", "Hydrogen", "Acid"), l.safety().stream().map(CautionList.Caution::topic).toList());
+        // a dendrite shorts the 30 mm gap (the leads then carry the whole current); a graphite anode in a
+        // chloride bath gives chlorine; hydrogen at the cathode; 1.5 mol/L HCl
+        assertEquals(List.of("Short circuit", "Chlorine", "Hydrogen", "Acid"),
+                l.safety().stream().map(CautionList.Caution::topic).toList());
         assertEquals(warnings.size(), l.safety().size() + l.notes().size(), "every warning is shown once");
         String strip = CautionStrip.line(l);
-        assertTrue(strip.startsWith("Safety: Chlorine, hydrogen, acid."), strip);
+        assertTrue(strip.startsWith("Safety: Short circuit, chlorine, hydrogen, acid."), strip);
     }
 
     @Test
