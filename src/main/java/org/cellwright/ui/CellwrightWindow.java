@@ -41,6 +41,7 @@ public final class CellwrightWindow implements WindowActions.Commands {
     private final StatusBar status = new StatusBar();
     private final FileCommands files = new FileCommands(dialogs, status, () -> this.session, () -> this.director,
             () -> this.dark);
+    private final LogCommands logs = new LogCommands(frame, status, () -> this.session, () -> this.director);
     private final boolean exitOnClose;
     private RunDirector director;
     private ScenarioSession session;
@@ -98,6 +99,7 @@ public final class CellwrightWindow implements WindowActions.Commands {
             }
         });
         frame.setJMenuBar(actions.menuBar());
+        logs.install(frame.getJMenuBar(), actions.exports);
         actions.bind(frame.getRootPane());
         actions.refresh(null, false);
         JPanel loading = new JPanel(new BorderLayout(0, 10));
@@ -162,9 +164,11 @@ public final class CellwrightWindow implements WindowActions.Commands {
         session = new ScenarioSession(lib, form, knobs, director, status, this::titleChanged);
         comparisonPanel = new ComparisonPanel(comparison, actions.pin, e -> director.setReference(e));
 
+        grid.onNewCharts(logs::chartsChanged);
         JComponent all = WindowLayout.arrange(form, knobs, bar, grid, events, strip, tabs, summary, cautions,
                 comparisonPanel);
 
+        logs.ready(lib, tabs);
         frame.getContentPane().removeAll();
         frame.getContentPane().add(all, BorderLayout.CENTER);
         frame.getContentPane().add(status, BorderLayout.SOUTH);
@@ -182,6 +186,7 @@ public final class CellwrightWindow implements WindowActions.Commands {
 
     private void refreshActions() {
         actions.refresh(director == null ? null : director.state(), session != null && session.scenario() != null);
+        logs.refresh();
     }
 
     private void titleChanged(String name, boolean changed) {
@@ -222,6 +227,11 @@ public final class CellwrightWindow implements WindowActions.Commands {
     /** @return the form (for the smoke test) */
     ScenarioForm form() {
         return form;
+    }
+
+    /** @return the measured-log and report commands (for the smoke test) */
+    LogCommands logs() {
+        return logs;
     }
 
     /** @return the window's actions (for the smoke test) */

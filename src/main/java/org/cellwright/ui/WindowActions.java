@@ -76,6 +76,8 @@ final class WindowActions {
     final Action shortcuts;
     final Action about;
     private final List<Action> exportKinds = new ArrayList<>();
+    /** The File > Export menu, once the menu bar is made (other commands add their exports to it). */
+    JMenu exports;
 
     WindowActions(Commands c) {
         newFrom = action("New from template...", "Start a new scenario from a shipped one", key(KeyEvent.VK_N, CTRL),
@@ -154,6 +156,7 @@ final class WindowActions {
         exports.addSeparator();
         exportKinds.forEach(exports::add);
         file.add(exports);
+        this.exports = exports;
         file.addSeparator();
         file.add(quit);
         JMenu runMenu = new JMenu("Run");
