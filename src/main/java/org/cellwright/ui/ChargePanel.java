@@ -92,7 +92,7 @@ final class ChargePanel extends JPanel implements Scrollable {
         List<ChargeShares.Part> parts = ChargeShares.parts(run, library);
         double q = run.summary().chargeC();
         add(new WrapText("Whole run: " + label, null, 0, Font.BOLD, 330), at(row++, 0, 3, 0));
-        add(new WrapText(sentence(parts, q, run.summary().targetMetal()), null, 0, Font.PLAIN, 330),
+        add(new WrapText(sentence(parts, q), null, 0, Font.PLAIN, 330),
                 at(row++, 0, 3, 6));
         for (String electrode : List.of("cathode", "anode")) {
             List<ChargeShares.Part> mine = parts.stream().filter(p -> p.electrode().equals(electrode)).toList();
@@ -150,19 +150,22 @@ final class ChargePanel extends JPanel implements Scrollable {
     /**
      * @param parts an electrode's parts (cathode first)
      * @param q the charge passed (C)
-     * @param target the target metal, or null
-     * @return the cathode's split in one sentence
+     * @return the cathode's split in plain words
      */
-    static String sentence(List<ChargeShares.Part> parts, double q, String target) {
+    static String sentence(List<ChargeShares.Part> parts, double q) {
         StringBuilder sb = new StringBuilder(String.format(Locale.ROOT, "Of the %.3g A h passed, the cathode spent",
                 q / S_PER_H));
         List<String> bits = new ArrayList<>();
         String corrosion = null;
+        String shorted = null;
         for (ChargeShares.Part p : parts) {
             if (!p.electrode().equals("cathode") || Math.abs(p.share()) < 5e-3) {
                 continue;
             }
-            if (p.corrosion()) {
+            if (p.words().equals(ChargeShares.SHORT)) {
+                shorted = String.format(Locale.ROOT, "%.1f %% passed through the dendrite short and drove no"
+                        + " reaction", 100 * p.share());
+            } else if (p.corrosion()) {
                 corrosion = String.format(Locale.ROOT, "%.1f %% of the charge went to %s, which the bath's oxidants"
                         + " took back", -100 * p.share(), p.words().replace("redissolving the ", "replacing the "));
             } else {
@@ -176,22 +179,26 @@ final class ChargePanel extends JPanel implements Scrollable {
             sb.append(i == 0 ? " " : i == bits.size() - 1 ? " and " : ", ").append(bits.get(i));
         }
         sb.append('.');
-        if (corrosion != null) {
-            sb.append(' ').append(Character.toUpperCase(corrosion.charAt(0))).append(corrosion.substring(1)).append('.');
+        for (String extra : new String[] {shorted, corrosion}) {
+            if (extra != null) {
+                sb.append(' ').append(Character.toUpperCase(extra.charAt(0))).append(extra.substring(1)).append('.');
+            }
         }
         return sb.toString();
     }
 
     /**
      * A reaction's colour, from the chart palette: the target metal blue, hydrogen vermillion, oxygen sky,
-     * chlorine green, other metals olive, reductions of a shuttle purple, other oxidations graphite, the
-     * deposit redissolving amber.
+     * chlorine green, other metals olive, either half of a redox shuttle purple, the deposit redissolving
+     * amber, the charge through a dendrite short graphite.
      */
     static Color colourOf(ChargeShares.Part p, String target, ChartStyle style) {
         String w = p.words();
         int hue;
         if (p.corrosion()) {
             hue = 4;
+        } else if (w.equals(ChargeShares.SHORT)) {
+            hue = 7;
         } else if (w.equals("hydrogen")) {
             hue = 1;
         } else if (w.equals("oxygen")) {
@@ -203,7 +210,7 @@ final class ChargePanel extends JPanel implements Scrollable {
         } else if (w.startsWith("depositing") || w.startsWith("dissolving")) {
             hue = 6;
         } else {
-            hue = w.startsWith("reducing") ? 3 : 7;
+            hue = 3;
         }
         return style.series(hue);
     }
