@@ -188,27 +188,27 @@ final class ChargePanel extends JPanel implements Scrollable {
     }
 
     /**
-     * A reaction's colour, from the chart palette: the target metal blue, hydrogen vermillion, oxygen sky,
-     * chlorine green, other metals olive, either half of a redox shuttle purple, the deposit redissolving
-     * amber, the charge through a dendrite short graphite.
+     * A reaction's colour, from the chart palette: the target metal blue, hydrogen vermillion, oxygen amber,
+     * chlorine green, other metals sky, either half of a redox shuttle purple, the deposit redissolving
+     * olive, the charge through a dendrite short graphite.
      */
     static Color colourOf(ChargeShares.Part p, String target, ChartStyle style) {
         String w = p.words();
         int hue;
         if (p.corrosion()) {
-            hue = 4;
+            hue = 6;
         } else if (w.equals(ChargeShares.SHORT)) {
             hue = 7;
         } else if (w.equals("hydrogen")) {
             hue = 1;
         } else if (w.equals("oxygen")) {
-            hue = 5;
+            hue = 4;
         } else if (w.contains("chlorine")) {
             hue = 2;
         } else if (target != null && w.equals("depositing " + target)) {
             hue = 0;
         } else if (w.startsWith("depositing") || w.startsWith("dissolving")) {
-            hue = 6;
+            hue = 5;
         } else {
             hue = 3;
         }

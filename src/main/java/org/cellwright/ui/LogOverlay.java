@@ -33,7 +33,7 @@ final class LogOverlay {
     /** Dataset index of the markers on each plot: above those the run charts use (0 to 3). */
     static final int DATASET = 6;
     /** Marker diameter (px): larger than the 1.8 px lines, so a dot stays visible on its line. */
-    static final double MARKER_PX = 6.5;
+    static final double MARKER_PX = 6;
 
     /** The charts a logged column is drawn on. */
     enum Target {
@@ -201,7 +201,8 @@ final class LogOverlay {
                 int i = c.model().speciesNames().indexOf(m.species());
                 yield style.series(i >= 0 ? i : c.model().speciesNames().size());
             }
-            case VOLTAGE -> style.text();
+            // the line is in the text colour over coloured bands: vermillion dots stand out from both
+            case VOLTAGE -> style.series(1);
             case CURRENT -> style.series(0);
             case DEPOSIT -> c.model().metalSymbols().size() == 1 ? style.series(0) : style.text();
             case TEMPERATURE -> style.series(1);

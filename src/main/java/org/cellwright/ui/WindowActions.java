@@ -121,6 +121,8 @@ final class WindowActions {
         {"Ctrl+N", "new scenario from a shipped one"},
         {"Ctrl+E", "export the run (PNG, SVG, CSV, JSON)"},
         {"Ctrl+D", "switch light and dark"},
+        {"Ctrl+L", "load a measured log (CSV), drawn over the charts"},
+        {"Ctrl+F", "fit the scenario to the measured log"},
         {"F1", "this list"},
         {"Ctrl+Q", "quit"},
     };

@@ -114,6 +114,19 @@ class LogWindowSmokeTest {
         await("the charge tab shows the fitted run", 10,
                 () -> edt(() -> window.logs().chargePanel().run() == window.director().result()));
         shoot(window.frame().getRootPane(), "window-charge.png");
+
+        // the report of the scenario shown, written off the event thread as the export menu does
+        Path report = Path.of("target", "window-report.html");
+        Files.deleteIfExists(report);
+        var worker = edt(() -> window.logs().writeReport(window.session().scenario(), window.session().name(),
+                ReportExport.Format.HTML, report));
+        assertTrue(worker.get().cautions().size() >= 2, "the copper run raises the acid and hydrogen cautions");
+        await("the status bar says the report was written", 10, () -> Files.exists(report));
+        edt(() -> {
+            window.toggleDark();
+            return null;
+        });
+        shoot(window.frame().getRootPane(), "window-charge-dark.png");
     }
 
     private static void shoot(JComponent root, String name) throws Exception {
