@@ -2,6 +2,7 @@ package org.cellwright.ui;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertNotNull;
+import static org.junit.jupiter.api.Assertions.assertSame;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 import static org.junit.jupiter.api.Assumptions.assumeFalse;
 
@@ -61,6 +62,27 @@ class LogWindowSmokeTest {
             return null;
         });
         await("the log is read", 30, () -> edt(() -> window.logs().overlay() != null));
+        LogOverlay good = edt(() -> window.logs().overlay());
+
+        // a bad log: its problems are listed with line and column in a dialog, and nothing changes
+        Path bad = Path.of("target", "bad-log.csv");
+        Files.writeString(bad, "time_min,current_A,cell_voltage_V\n0,4.0,2.2\n5,4.0,2.4 V\n3,4.1,2.3\n");
+        edt(() -> {
+            window.logs().loadLog(bad);
+            return null;
+        });
+        await("the problems dialog opens", 30, () -> edt(() -> problemsDialog() != null));
+        javax.swing.JDialog problems = edt(LogWindowSmokeTest::problemsDialog);
+        String listed = edt(() -> text(problems.getContentPane()));
+        assertTrue(listed.contains("bad-log.csv:3:"), "line of the bad voltage: " + listed);
+        assertTrue(listed.contains("cell_voltage_V"), listed);
+        assertTrue(!listed.contains("Exception") && !listed.contains("\tat "), "no stack trace: " + listed);
+        shoot(problems.getRootPane(), "window-log-problems.png");
+        edt(() -> {
+            problems.dispose();
+            return null;
+        });
+        assertSame(good, edt(() -> window.logs().overlay()), "a bad log leaves the loaded one in place");
         edt(() -> {
             window.session().run();
             return null;
@@ -129,6 +151,31 @@ class LogWindowSmokeTest {
         shoot(window.frame().getRootPane(), "window-charge-dark.png");
     }
 
+    private static javax.swing.JDialog problemsDialog() {
+        for (java.awt.Window w : java.awt.Window.getWindows()) {
+            if (w instanceof javax.swing.JDialog d && d.isShowing() && "Log problems".equals(d.getTitle())) {
+                return d;
+            }
+        }
+        return null;
+    }
+
+    /** @return the text of every label and text component inside */
+    private static String text(java.awt.Container c) {
+        StringBuilder sb = new StringBuilder();
+        for (java.awt.Component k : c.getComponents()) {
+            if (k instanceof javax.swing.JLabel l) {
+                sb.append(l.getText()).append('\n');
+            } else if (k instanceof javax.swing.text.JTextComponent t) {
+                sb.append(t.getText()).append('\n');
+            }
+            if (k instanceof java.awt.Container inner) {
+                sb.append(text(inner));
+            }
+        }
+        return sb.toString();
+    }
+
     private static void shoot(JComponent root, String name) throws Exception {
         Thread.sleep(400);
         AtomicReference<BufferedImage> img = new AtomicReference<>();
@@ -140,7 +187,7 @@ class LogWindowSmokeTest {
             img.set(b);
         });
         Files.createDirectories(Path.of("target"));
-        assertTrue(img.get().getWidth() > 300 && img.get().getHeight() > 300);
+        assertTrue(img.get().getWidth() > 200 && img.get().getHeight() > 100, name + " is too small");
         ImageIO.write(img.get(), "png", Path.of("target", name).toFile());
     }
 
