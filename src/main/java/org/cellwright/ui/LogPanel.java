@@ -22,7 +22,8 @@ import javax.swing.Scrollable;
 /**
  * The "Log" tab: which measured log is drawn over the charts, how far the run shown lies from it column by
  * column (so a slider moved by hand shows whether it brings the model closer), and the last fit's values with
- * their 95 % intervals; with buttons to load a log, fit and remove it.
+ * their 95 % intervals; with buttons to load a log, fit and remove it. Also the dialog that lists why a log
+ * cannot be read.
  */
 final class LogPanel extends JPanel implements Scrollable {
 
@@ -201,6 +202,26 @@ final class LogPanel extends JPanel implements Scrollable {
         c.anchor = GridBagConstraints.NORTHWEST;
         c.insets = new Insets(top, 0, 0, 0);
         return c;
+    }
+
+    /**
+     * Lists why a log cannot be read, one problem a line ({@code file:line:column: column: what is wrong}).
+     *
+     * @param owner the window
+     * @param file the log
+     * @param problems its problems
+     */
+    static void showProblems(java.awt.Component owner, java.nio.file.Path file,
+                             List<org.cellwright.io.Problem> problems) {
+        StringBuilder sb = new StringBuilder();
+        problems.forEach(p -> sb.append(p.format()).append('\n'));
+        javax.swing.JTextArea area = new javax.swing.JTextArea(sb.toString(), Math.min(14, problems.size() + 1), 80);
+        area.setEditable(false);
+        JPanel p = new JPanel(new java.awt.BorderLayout(0, 8));
+        p.add(new JLabel(file.getFileName() + " cannot be read as a run log; nothing was changed."
+                + " Each line gives file:line:column: column name: what is wrong."), java.awt.BorderLayout.NORTH);
+        p.add(new javax.swing.JScrollPane(area), java.awt.BorderLayout.CENTER);
+        javax.swing.JOptionPane.showMessageDialog(owner, p, "Log problems", javax.swing.JOptionPane.ERROR_MESSAGE);
     }
 
     @Override

@@ -140,7 +140,7 @@ class LogWindowSmokeTest {
         // the report of the scenario shown, written off the event thread as the export menu does
         Path report = Path.of("target", "window-report.html");
         Files.deleteIfExists(report);
-        var worker = edt(() -> window.logs().writeReport(window.session().scenario(), window.session().name(),
+        var worker = edt(() -> window.logs().reports().writeReport(window.session().scenario(), window.session().name(),
                 ReportExport.Format.HTML, report));
         assertTrue(worker.get().cautions().size() >= 2, "the copper run raises the acid and hydrogen cautions");
         await("the status bar says the report was written", 10, () -> Files.exists(report));
