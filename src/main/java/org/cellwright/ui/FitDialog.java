@@ -14,7 +14,6 @@ import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Locale;
 import java.util.Map;
-import java.util.function.Consumer;
 
 import javax.swing.BorderFactory;
 import javax.swing.JButton;
@@ -335,7 +334,8 @@ final class FitDialog extends JDialog {
         cancel.setText("Close");
     }
 
-    private void close() {
+    /** Cancels a running fit (it stops before its next engine run), else closes the dialog. */
+    void close() {
         if (running) {
             host.cancelFit();
             progress.setText("Cancelling: the fit stops before its next engine run...");
@@ -349,14 +349,14 @@ final class FitDialog extends JDialog {
         return running;
     }
 
+    /** @return the progress line and the last setup error (for tests) */
+    String shownStatus() {
+        return progress.getText() + "\n" + setupError.getText();
+    }
+
     /** @return the fitted values table (for tests) */
     DefaultTableModel parameterTable() {
         return params;
-    }
-
-    /** @param apply sets the ticks (for tests and the smoke run) */
-    void tick(Consumer<List<JCheckBox>> apply) {
-        apply.accept(boxes);
     }
 
     private static String html(String s) {

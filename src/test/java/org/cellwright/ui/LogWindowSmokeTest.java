@@ -103,6 +103,20 @@ class LogWindowSmokeTest {
         FitDialog dialog = edt(() -> window.logs().fitDialog());
         assertNotNull(dialog);
         shoot(dialog.getRootPane(), "window-fit-setup.png");
+        String before = edt(() -> window.session().name());
+        edt(() -> {
+            dialog.start();
+            return null;
+        });
+        await("the first iteration is reported", FIT_S, () -> edt(() -> dialog.shownStatus().contains("Iteration")));
+        edt(() -> {
+            dialog.close();
+            return null;
+        });
+        await("Cancel stops the fit", 30, () -> edt(() -> !dialog.isRunning()));
+        assertTrue(edt(dialog::shownStatus).contains("cancelled"), edt(dialog::shownStatus));
+        assertEquals(before, edt(() -> window.session().name()), "a cancelled fit leaves the scenario as it was");
+        assertTrue(edt(dialog::isDisplayable), "the dialog stays open for another try");
         edt(() -> {
             dialog.start();
             return null;
