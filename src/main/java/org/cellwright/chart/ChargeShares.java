@@ -21,7 +21,7 @@ import org.cellwright.sim.ScenarioChemistry;
 public final class ChargeShares {
 
     /** Words of the charge that passed through a dendrite short circuit instead of the bath. */
-    public static final String SHORT = "through the dendrite short (no reaction)";
+    public static final String SHORT = "through the dendrite short";
     /**
      * Share of the charge below which what the reactions leave unaccounted is taken as the integrator's
      * rounding, not a short's bypass (common practice: far above the 1e-10 seen in runs, far below 0.1 %).

@@ -54,7 +54,15 @@ final class ChargeBar extends JComponent {
     }
 
     private double redissolvedShare() {
-        return -parts.stream().filter(p -> p.share() < 0).mapToDouble(ChargeShares.Part::share).sum();
+        // only the deposit redissolving: a reaction run backwards by a hair (1e-12 of the charge) draws nothing
+        double back = -parts.stream().filter(ChargeShares.Part::corrosion).mapToDouble(ChargeShares.Part::share).sum();
+        return back >= 5e-4 ? back : 0;
+    }
+
+    @Override
+    public Dimension getMinimumSize() {
+        // never squeezed away when the tab is short of height: the scroll pane scrolls instead
+        return getPreferredSize();
     }
 
     @Override
@@ -89,7 +97,7 @@ final class ChargeBar extends JComponent {
             g.setStroke(new BasicStroke(1.6f));
             g.drawLine((int) Math.round(at), 0, (int) Math.round(at), BAR + STRIP + 1);
             for (int i = 0; i < parts.size(); i++) {
-                if (parts.get(i).share() < 0) {
+                if (parts.get(i).corrosion()) {
                     g.setColor(colours.get(i));
                 }
             }

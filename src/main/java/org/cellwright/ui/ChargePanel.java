@@ -112,7 +112,9 @@ final class ChargePanel extends JPanel implements Scrollable {
                 }
                 JLabel words = new JLabel(p.words(), new ChargeBar.Swatch(colours.get(i), p.corrosion()), JLabel.LEFT);
                 words.setToolTipText(p.corrosion() ? "Charge the bath's oxidants took back from the deposit"
-                        + " (corrosion): the cathode had to pass it again" : null);
+                        + " (corrosion): the cathode had to pass it again"
+                        : p.words().equals(ChargeShares.SHORT) ? "After the short the current passes through the"
+                        + " dendrite from cathode to anode and drives no reaction" : null);
                 add(words, at(row, 0, 1, 2));
                 add(right(String.format(Locale.ROOT, "%+.1f %%", 100 * p.share()).replace("+", "")), at(row, 1, 1, 2));
                 add(right(String.format(Locale.ROOT, "%.3g A h", p.chargeC() / S_PER_H)), at(row++, 2, 1, 2));
@@ -134,7 +136,9 @@ final class ChargePanel extends JPanel implements Scrollable {
                 }
             };
             add(l, at(row++, 0, 3, 6));
-            add(new WrapText(r.value(), null, 0, Font.PLAIN, 330), at(row++, 0, 3, 1));
+            String value = r.value().equals("-") && run.summary().shortCircuitS() != null
+                    ? "none: the current passes through the dendrite short" : r.value();
+            add(new WrapText(value, null, 0, Font.PLAIN, 330), at(row++, 0, 3, 1));
         }
         finish(row);
     }
