@@ -87,11 +87,19 @@ public record RunReport(String title, String source, String notes, List<Row> fig
         rows.add(new Row("ended", ending(s.stopReason()) + " after " + RunClock.format(s.durationS())));
         rows.add(new Row("charge passed", f("%s A h (%.0f C)", g4(s.chargeC() / 3600), s.chargeC())));
         StringBuilder dep = new StringBuilder();
-        s.depositKg().forEach((m, kg) -> dep.append(dep.length() == 0 ? "" : ", ").append(m + " " + g4(kg * 1000) + " g"));
+        s.depositKg().forEach((m, kg) -> {
+            if (kg > 0) {
+                dep.append(dep.length() == 0 ? "" : ", ").append(m + " " + SummaryText.mass(kg));
+            }
+        });
         rows.add(new Row("deposit", dep.length() == 0 ? "none" : dep.toString()));
-        if (s.depositKg().size() > 1 && s.depositTotalKg() > 0) {
+        if (s.depositKg().values().stream().filter(kg -> kg > 0).count() > 1) {
             StringBuilder pur = new StringBuilder();
-            s.purity().forEach((m, x) -> pur.append(pur.length() == 0 ? "" : ", ").append(f("%s %.3f %%", m, 100 * x)));
+            s.purity().forEach((m, x) -> {
+                if (x > 0) {
+                    pur.append(pur.length() == 0 ? "" : ", ").append(m + " " + SummaryText.massFraction(x));
+                }
+            });
             rows.add(new Row("purity of the deposit", pur.toString()));
         }
         if (s.targetMetal() != null) {

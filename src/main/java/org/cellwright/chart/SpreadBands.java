@@ -24,9 +24,9 @@ import org.jfree.data.xy.YIntervalSeriesCollection;
 public final class SpreadBands {
 
     /** Dataset index of the bands on each plot (behind the run's own datasets 0-3). */
-    static final int BANDS = 5;
+    public static final int BANDS = 5;
     /** Dataset index of the efficiency bands, on the current chart's second axis. */
-    static final int EFFICIENCY_BANDS = 6;
+    public static final int EFFICIENCY_BANDS = 6;
     /** The start of the note under each chart title. */
     static final String NOTE = "shaded: 5-95 % of ";
     /** Opacity of a band. */
@@ -75,10 +75,46 @@ public final class SpreadBands {
                     chart.removeSubtitle(t);
                 }
             }
-            TextTitle note = new TextTitle(NOTE + samples + " samples of the uncertain inputs", style.font(10f, false));
+            TextTitle note = new TextTitle(NOTE + samples + " samples", style.font(10f, false));
             note.setPaint(style.mutedText());
             chart.addSubtitle(note);
         }
+    }
+
+    /**
+     * Takes the bands off the charts again (their datasets, the voltage chart's polygon and the notes); does
+     * nothing to charts without bands.
+     *
+     * @param charts the charts
+     */
+    public static void remove(RunCharts charts) {
+        for (JFreeChart chart : charts.all()) {
+            XYPlot plot = chart.getXYPlot();
+            if (plot.getDataset(BANDS) != null) {
+                plot.setDataset(BANDS, null);
+            }
+            if (plot.getDataset(EFFICIENCY_BANDS) != null) {
+                plot.setDataset(EFFICIENCY_BANDS, null);
+            }
+            for (Object a : new java.util.ArrayList<>(plot.getAnnotations())) {
+                if (a instanceof XYPolygonAnnotation p && NOTE.equals(p.getToolTipText())) {
+                    plot.removeAnnotation(p);
+                }
+            }
+            for (int i = chart.getSubtitleCount() - 1; i >= 0; i--) {
+                if (chart.getSubtitle(i) instanceof TextTitle t && t.getText().startsWith(NOTE)) {
+                    chart.removeSubtitle(t);
+                }
+            }
+        }
+    }
+
+    /**
+     * @param charts the charts
+     * @return true when they show bands now
+     */
+    public static boolean shown(RunCharts charts) {
+        return charts.concentrations().getXYPlot().getDataset(BANDS) != null;
     }
 
     /** Draws a band as a translucent polygon over everything on the plot (replacing an earlier one). */

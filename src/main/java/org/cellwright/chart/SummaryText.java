@@ -35,17 +35,23 @@ public final class SummaryText {
         out.add(String.format(Locale.ROOT, "  charge           %.4g A h (%.4g C)", s.chargeC() / 3600, s.chargeC()));
         StringBuilder dep = new StringBuilder();
         for (Map.Entry<String, Double> e : s.depositKg().entrySet()) {
+            if (e.getValue() <= 0) {
+                continue;
+            }
             if (dep.length() > 0) {
                 dep.append(", ");
             }
-            dep.append(String.format(Locale.ROOT, "%s %.4g g", e.getKey(), e.getValue() * 1000));
+            dep.append(e.getKey()).append(' ').append(mass(e.getValue()));
         }
         out.add("  deposit          " + (dep.length() == 0 ? "none" : dep.toString())
                 + String.format(Locale.ROOT, "  (total %.4g g)", s.depositTotalKg() * 1000));
-        if (s.depositKg().size() > 1 && s.depositTotalKg() > 0) {
+        if (s.depositKg().values().stream().filter(kg -> kg > 0).count() > 1) {
             StringBuilder pur = new StringBuilder();
-            s.purity().forEach((m, f) -> pur.append(pur.length() == 0 ? "" : ", ")
-                    .append(String.format(Locale.ROOT, "%s %.3f %%", m, f * 100)));
+            s.purity().forEach((m, f) -> {
+                if (f > 0) {
+                    pur.append(pur.length() == 0 ? "" : ", ").append(m).append(' ').append(massFraction(f));
+                }
+            });
             out.add("  purity           " + pur);
         }
         if (s.targetMetal() != null) {
@@ -127,5 +133,39 @@ public final class SummaryText {
             case "temperature_limit" -> "at the stop temperature";
             default -> reason;
         };
+    }
+
+    /**
+     * A deposit mass in the unit that reads best: g down to 10 mg, then mg, then ug.
+     *
+     * @param kg mass (kg)
+     * @return e.g. "8021 g", "3.55 mg", "0.42 ug"
+     */
+    public static String mass(double kg) {
+        double g = kg * 1000;
+        if (g >= 0.01) {
+            return String.format(Locale.ROOT, "%.4g g", g);
+        }
+        if (g >= 1e-5) {
+            return String.format(Locale.ROOT, "%.3g mg", g * 1000);
+        }
+        return String.format(Locale.ROOT, "%.2g ug", g * 1e6);
+    }
+
+    /**
+     * A mass fraction of a deposit: per cent with three decimals, traces in ppm, a nearly pure metal as
+     * "> 99.999 %" rather than a rounded 100.000 %.
+     *
+     * @param f mass fraction (0..1)
+     * @return the fraction in words a refiner reads
+     */
+    public static String massFraction(double f) {
+        if (f >= 1 - 1e-5 && f < 1) {
+            return "> 99.999 %";
+        }
+        if (f < 1e-5) {
+            return String.format(Locale.ROOT, "%.2g ppm", f * 1e6);
+        }
+        return String.format(Locale.ROOT, "%.3f %%", f * 100);
     }
 }

@@ -9,7 +9,7 @@ import org.cellwright.sim.TracePoint;
 
 /**
  * The cell voltage taken apart at the start of a run, averaged over it (in time), and at its end: the
- * equilibrium voltage of the dominant reactions, the anode and cathode overpotentials (as magnitudes), and the
+ * equilibrium voltage (current-weighted over each electrode's reactions), the anode and cathode overpotentials (as magnitudes), and the
  * ohmic drops across the solution, the gas in the gap and the contacts. The parts add up to the cell voltage.
  *
  * @param parts the parts in order, each with its values

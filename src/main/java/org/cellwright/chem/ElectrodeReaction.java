@@ -21,10 +21,13 @@ import java.util.Optional;
  * @param kinetics default kinetics (any material)
  * @param kineticsByMaterial kinetics on named electrode materials
  * @param sources where each number comes from ("e0", "dE0dT", ...)
+ * @param requires species that must be in the bath for the reaction to run at all: the ligand that makes a
+ *     participant stable (Cu+ only as chloro complexes); empty for most reactions
  */
 public record ElectrodeReaction(String name, String equation, int n, List<Participant> participants,
                                 double e0V, double dE0dTVPerK, Kinetics kinetics,
-                                Map<String, Kinetics> kineticsByMaterial, Map<String, String> sources) {
+                                Map<String, Kinetics> kineticsByMaterial, Map<String, String> sources,
+                                List<String> requires) {
 
     public ElectrodeReaction {
         Objects.requireNonNull(name, "name");
@@ -38,6 +41,14 @@ public record ElectrodeReaction(String name, String equation, int n, List<Partic
         participants = List.copyOf(participants);
         kineticsByMaterial = Map.copyOf(kineticsByMaterial);
         sources = Map.copyOf(sources);
+        requires = requires == null ? List.of() : List.copyOf(requires);
+    }
+
+    /** A reaction that runs in any bath holding its participants (no {@link #requires}). */
+    public ElectrodeReaction(String name, String equation, int n, List<Participant> participants, double e0V,
+                             double dE0dTVPerK, Kinetics kinetics, Map<String, Kinetics> kineticsByMaterial,
+                             Map<String, String> sources) {
+        this(name, equation, n, participants, e0V, dE0dTVPerK, kinetics, kineticsByMaterial, sources, List.of());
     }
 
     /** @return the kinetics on the given electrode material, falling back to the default set */
@@ -65,18 +76,18 @@ public record ElectrodeReaction(String name, String equation, int n, List<Partic
     /** @return a copy with other standard potential (V) */
     public ElectrodeReaction withE0(double e0) {
         return new ElectrodeReaction(name, equation, n, participants, e0, dE0dTVPerK, kinetics,
-                kineticsByMaterial, sources);
+                kineticsByMaterial, sources, requires);
     }
 
     /** @return a copy with other kinetics, on one material or (material null) the default */
     public ElectrodeReaction withKinetics(String material, Kinetics k) {
         if (material == null) {
             return new ElectrodeReaction(name, equation, n, participants, e0V, dE0dTVPerK, k,
-                    kineticsByMaterial, sources);
+                    kineticsByMaterial, sources, requires);
         }
         var byMaterial = new java.util.HashMap<>(kineticsByMaterial);
         byMaterial.put(material, k);
         return new ElectrodeReaction(name, equation, n, participants, e0V, dE0dTVPerK, kinetics,
-                byMaterial, sources);
+                byMaterial, sources, requires);
     }
 }

@@ -1,6 +1,8 @@
 package org.cellwright.io;
 
+import java.util.ArrayList;
 import java.util.LinkedHashMap;
+import java.util.List;
 import java.util.Locale;
 import java.util.Map;
 import java.util.Optional;
@@ -23,8 +25,9 @@ import org.cellwright.chem.Species;
 final class ReactionTables {
 
     private static final Set<String> REACTION_KEYS = Set.of("note", "equation", "e0", "de0dt", "i0", "alpha_a",
-            "alpha_c", "on");
-    private static final Set<String> REACTION_NUMBERS = Set.of("e0", "de0dt", "i0", "alpha_a", "alpha_c");
+            "alpha_c", "on", "requires");
+    /** Keys that carry a {@code _source}: the numbers, and the species a reaction requires. */
+    private static final Set<String> REACTION_SOURCED = Set.of("e0", "de0dt", "i0", "alpha_a", "alpha_c", "requires");
     private static final Set<String> KINETICS_KEYS = Set.of("note", "i0", "alpha_a", "alpha_c");
     private static final Set<String> KINETICS_NUMBERS = Set.of("i0", "alpha_a", "alpha_c");
     private static final Set<String> HOMOGENEOUS_KEYS = Set.of("note", "equation", "rate_constant", "orders");
@@ -37,7 +40,7 @@ final class ReactionTables {
     }
 
     ElectrodeReaction electrode(DataTable t, String couple) throws LibraryFormatException {
-        t.allowOnly(REACTION_KEYS, REACTION_NUMBERS);
+        t.allowOnly(REACTION_KEYS, REACTION_SOURCED);
         String equationText = t.string("equation");
         ReactionEquation equation;
         try {
@@ -63,6 +66,14 @@ final class ReactionTables {
         if (t.has("note")) {
             sources.put("note", t.string("note"));
         }
+        List<String> requires = new ArrayList<>();
+        for (String ligand : t.strings("requires")) {
+            requires.add(vocabulary.findSpecies(ligand).map(Species::name).orElseThrow(
+                    () -> t.error("requires", "unknown species '" + ligand + "' (not in the [species] tables)")));
+        }
+        if (!requires.isEmpty()) {
+            sources.put("requires", t.source("requires"));
+        }
         Map<String, Kinetics> byMaterial = new LinkedHashMap<>();
         if (t.has("on")) {
             DataTable on = t.table("on");
@@ -80,7 +91,7 @@ final class ReactionTables {
         }
         try {
             return new ElectrodeReaction(name, equation.text(), equation.electrons(), equation.participants(), e0,
-                    dE0dT, kinetics, byMaterial, sources);
+                    dE0dT, kinetics, byMaterial, sources, requires);
         } catch (IllegalArgumentException e) {
             throw t.error(null, e.getMessage());
         }

@@ -70,6 +70,22 @@ public final class ScenarioVariants implements PointScenarios {
         }
     }
 
+    /**
+     * The variants of scenario text held in memory (the window's form, as the scenario reader reads it).
+     *
+     * @param library the chemistry
+     * @param text the base scenario's TOML text
+     * @param name the name problems are reported under
+     * @param baseSets {@code key=value} options applied before each point's values
+     * @param axes the varied keys, in the order of the grid point's values
+     * @return the variants
+     * @throws ScenarioException when the base scenario is invalid
+     */
+    public static ScenarioVariants ofText(ChemLibrary library, String text, String name, List<String> baseSets,
+                                          List<SweepAxis> axes) throws ScenarioException {
+        return new ScenarioVariants(library, text, name, baseSets, axes);
+    }
+
     /** @return the base scenario (with the user's {@code --set} options) and its warnings */
     public ScenarioReader.Result base() {
         return base;

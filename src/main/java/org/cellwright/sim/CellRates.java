@@ -308,10 +308,8 @@ public final class CellRates implements FirstOrderDifferentialEquations {
         for (int k = 0; k < an.length; k++) {
             an[k] = op.anodeI[k] * op.anodeAreaM2;
         }
-        int dc = dominant(cath, -1);
-        int da = dominant(an, 1);
-        double eqC = dc >= 0 ? op.cathode.eEq[dc] : op.cathodeE;
-        double eqA = da >= 0 ? op.anode.eEq[da] : op.anodeE;
+        double eqC = chargeWeighted(cath, -1, op.cathode.eEq, op.cathodeE);
+        double eqA = chargeWeighted(an, 1, op.anode.eEq, op.anodeE);
         double eff = 0;
         double limitRatio = 0;
         if (net.targetSlot >= 0 && op.currentA > 0) {
@@ -330,15 +328,28 @@ public final class CellRates implements FirstOrderDifferentialEquations {
                 op.thicknessM);
     }
 
-    private static int dominant(double[] amps, int sign) {
-        int best = -1;
-        double max = 0;
+    /**
+     * Equilibrium potential of an electrode that runs several reactions at once: the mean of the reactions'
+     * equilibrium potentials weighted by their currents in the electrode's direction. Then
+     * {@code E = sum w_k Eeq_k + sum w_k (E - Eeq_k)} splits the potential exactly, and the split moves
+     * smoothly when one reaction takes over from another (a dominant-reaction split jumps there).
+     *
+     * @param amps   partial currents (A), anodic positive
+     * @param sign   +1 for the anode, -1 for the cathode
+     * @param eEq    equilibrium potentials (V vs SHE)
+     * @param idle   what to return when nothing runs in the electrode's direction (the electrode potential)
+     * @return weighted equilibrium potential (V vs SHE)
+     */
+    private static double chargeWeighted(double[] amps, int sign, double[] eEq, double idle) {
+        double sum = 0;
+        double weighted = 0;
         for (int k = 0; k < amps.length; k++) {
-            if (sign * amps[k] > max) {
-                max = sign * amps[k];
-                best = k;
+            double a = sign * amps[k];
+            if (a > 0) {
+                sum += a;
+                weighted += a * eEq[k];
             }
         }
-        return best;
+        return sum > 0 ? weighted / sum : idle;
     }
 }

@@ -25,7 +25,9 @@ import org.cellwright.chem.Species;
  * when every participant on its reduced side is present (dissolved, water, or the metal of a soluble
  * anode). Gases are products only: no hydrogen oxidation without dissolved hydrogen, no oxygen or chlorine
  * reduction. What a reaction makes joins the bath, and the search repeats until nothing new appears (so a
- * graphite anode in a stannous bath makes Sn4+, which is then reduced at the cathode).
+ * graphite anode in a stannous bath makes Sn4+, which is then reduced at the cathode). A reaction that
+ * requires a species ({@link ElectrodeReaction#requires()}, e.g. the chloride that makes Cu+ stable) runs
+ * only when that species is in the bath or made there.
  */
 public final class ReactionNetwork {
 
@@ -330,6 +332,9 @@ public final class ReactionNetwork {
         }
 
         private boolean canReduce(ElectrodeReaction r, Set<String> present) {
+            if (!present.containsAll(r.requires())) {
+                return false;
+            }
             for (Participant p : r.participants()) {
                 if (p.coefficient() < 0 && !available(p, present, false)) {
                     return false;
@@ -339,6 +344,9 @@ public final class ReactionNetwork {
         }
 
         private boolean canOxidise(ElectrodeReaction r, Set<String> present) {
+            if (!present.containsAll(r.requires())) {
+                return false;
+            }
             for (Participant p : r.participants()) {
                 if (p.coefficient() > 0 && !available(p, present, true)) {
                     return false;

@@ -6,6 +6,7 @@ import java.util.Locale;
 import java.util.Map;
 
 import org.cellwright.cell.Scenario;
+import org.cellwright.chem.PhysicalConstants;
 
 /**
  * The cautions a run triggers (chlorine, hydrogen, acid, lead, electrical) and notes on the validity of the
@@ -137,9 +138,17 @@ final class RunWarnings {
         }
     }
 
+    /**
+     * Hydrogen worth a caution: more than 0.1 mL and more than 0.1 % of the charge passed. A cell that passes
+     * 7200 A h with a few millilitres of hydrogen (a copper tankhouse cell) is not cautioned; a bench cell
+     * losing a tenth of a percent of its charge to hydrogen is (common practice: hydrogen is a hazard where it
+     * collects under lids and hoods, so small cells are cautioned early).
+     */
     private void hydrogen() {
         double l = litres("H2");
-        if (l > 1e-4) {
+        double charge = trace.isEmpty() ? 0 : trace.get(trace.size() - 1).chargeC();
+        double share = charge > 0 ? gasMol.getOrDefault("H2", 0.0) * 2 * PhysicalConstants.FARADAY / charge : 0;
+        if (l > 1e-4 && share > 1e-3) {
             out.add(String.format(Locale.ROOT, "Hydrogen: the cathode gives off about %.3g L of hydrogen (0 C, 1 atm),"
                     + " which forms explosive mixtures with air (4 to 75 %% by volume). Ventilate; keep sparks and"
                     + " flames away from the cell.", l));
@@ -196,8 +205,10 @@ final class RunWarnings {
             ionic += 0.5 * z * z * c[j] / 1000;
         }
         if (ionic > 3) {
-            out.add(String.format(Locale.ROOT, "Data validity: the ionic strength (%.1f mol/L) is above the range"
-                    + " in which the conductivity model was checked (about 2 mol/L of a single salt or acid).", ionic));
+            out.add(String.format(Locale.ROOT, "Data validity: the ionic strength (%.1f mol/L) is above that of the"
+                    + " single-salt tables the conductivity model was checked against (about 2 mol/L); in sulfate"
+                    + " tankhouse baths it stays within about 10 %% of plant figures (docs/validation.md). Read the"
+                    + " ohmic drop with that margin.", ionic));
         }
     }
 

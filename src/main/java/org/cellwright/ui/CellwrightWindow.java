@@ -42,6 +42,7 @@ public final class CellwrightWindow implements WindowActions.Commands {
     private final FileCommands files = new FileCommands(dialogs, status, () -> this.session, () -> this.director,
             () -> this.dark);
     private final LogCommands logs = new LogCommands(frame, status, () -> this.session, () -> this.director);
+    private final Studies studies = new Studies(frame, () -> this.session);
     private final boolean exitOnClose;
     private RunDirector director;
     private ScenarioSession session;
@@ -98,8 +99,10 @@ public final class CellwrightWindow implements WindowActions.Commands {
                 quit();
             }
         });
-        frame.setJMenuBar(actions.menuBar());
-        logs.install(frame.getJMenuBar(), actions.exports);
+        javax.swing.JMenuBar menus = actions.menuBar();
+        menus.add(studies.menu(), menus.getMenuCount() - 1);
+        logs.install(menus, actions.exports);
+        frame.setJMenuBar(menus);
         actions.bind(frame.getRootPane());
         actions.refresh(null, false);
         JPanel loading = new JPanel(new BorderLayout(0, 10));
@@ -162,6 +165,7 @@ public final class CellwrightWindow implements WindowActions.Commands {
             }
         });
         session = new ScenarioSession(lib, form, knobs, director, status, this::titleChanged);
+        studies.attach(lib, director, form, summary, status);
         comparisonPanel = new ComparisonPanel(comparison, actions.pin, e -> director.setReference(e));
 
         grid.onNewCharts(logs::chartsChanged);
@@ -181,6 +185,10 @@ public final class CellwrightWindow implements WindowActions.Commands {
             status.fail("The default scenario does not read: " + e.getMessage());
         }
         refreshActions();
+        // start with the keyboard on the charts, not in the first form field: Space then plays the run and
+        // the title field is not selected whole (and scrolled to its end) by the look and feel
+        grid.setFocusable(true);
+        javax.swing.SwingUtilities.invokeLater(grid::requestFocusInWindow);
         ready = true;
     }
 
@@ -217,6 +225,11 @@ public final class CellwrightWindow implements WindowActions.Commands {
     /** @return the sliders (for the smoke test) */
     KnobPanel knobs() {
         return knobs;
+    }
+
+    /** @return the studies: sweep, plan, bands (for the smoke test) */
+    Studies studies() {
+        return studies;
     }
 
     /** @return the status bar (for the smoke test) */

@@ -66,6 +66,8 @@ final class RunDirector {
     private boolean dark;
     private long lastTick;
     private double lastEngineMs = Double.NaN;
+    private Runnable chartsChanged = () -> {
+    };
 
     /**
      * @param lib the chemistry library
@@ -120,6 +122,7 @@ final class RunDirector {
         setSpeed(PlaybackSpeed.forDuration(span));
         panels.playback().showSpeed(speed);
         stateChanged.run();
+        chartsChanged.run();
     }
 
     /**
@@ -182,6 +185,7 @@ final class RunDirector {
         showHead();
         showTiming(null);
         stateChanged.run();
+        chartsChanged.run();
     }
 
     /** Shows a run's summary, cautions and place in the comparison. */
@@ -313,6 +317,7 @@ final class RunDirector {
         dark = darkLook;
         if (charts != null) {
             charts.setStyle(ChartStyle.of(darkLook));
+            chartsChanged.run();
         }
     }
 
@@ -331,6 +336,15 @@ final class RunDirector {
         if (e == null && result != null) {
             charts.setTimeSpan(RunChartModel.plannedSpanOf(result));
         }
+        chartsChanged.run();
+    }
+
+    /**
+     * @param r told (on the event thread) after the charts were prepared, show a new run, or were restyled,
+     *     so that an overlay (the spread bands) can draw itself again or clear
+     */
+    void onChartsChanged(Runnable r) {
+        chartsChanged = r;
     }
 
     /** A chart has finished drawing (for the replot clock). */

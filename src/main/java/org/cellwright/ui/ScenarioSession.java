@@ -188,6 +188,30 @@ final class ScenarioSession {
         director.run(scenario, label());
     }
 
+    /**
+     * Puts a variant of the scenario into the form (a sweep point, a planned schedule), keeps the file it
+     * belongs to (marked changed) and runs it, as a slider move does.
+     *
+     * @param d the variant's draft
+     * @param what a few words saying where it comes from
+     * @return true when it checks out and runs
+     */
+    boolean showVariant(ScenarioDraft d, String what) {
+        check.cancel();
+        form.show(d);
+        DraftCheck.Outcome o = DraftCheck.draft(d, lib, name);
+        form.showOutcome(o);
+        markChanged();
+        if (!o.ok()) {
+            status.fail(what + " has problems, marked in the form.");
+            return false;
+        }
+        adopt(o.scenario(), true);
+        status.say("Running " + what + "...");
+        director.run(scenario, label());
+        return true;
+    }
+
     /** The user typed in the form. */
     void formEdited() {
         markChanged();

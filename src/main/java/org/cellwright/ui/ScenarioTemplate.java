@@ -24,7 +24,8 @@ record ScenarioTemplate(String fileName, String title, String notes, String text
     /** The shipped scenarios, the default first. */
     static final List<String> FILES = List.of("tin-stripping-liquor.toml", "copper-etchant-bleed.toml",
             "silver-nitrate-refining.toml", "tin-dilute-sponge.toml", "tin-narrow-gap-dendrites.toml",
-            "tin-divided-cell.toml", "tin-shuttle-efficiency.toml");
+            "tin-divided-cell.toml", "tin-shuttle-efficiency.toml", "copper-electrowinning.toml",
+            "zinc-electrowinning.toml");
 
     private static final String FOLDER = "templates/";
 

@@ -6,6 +6,7 @@ import java.util.Locale;
 import java.util.Map;
 
 import org.cellwright.chart.ChargeShares;
+import org.cellwright.chart.SummaryText;
 import org.cellwright.sim.RunClock;
 import org.cellwright.sim.RunResult;
 import org.cellwright.sim.RunSummary;
@@ -44,15 +45,15 @@ final class SummaryFigures {
         StringBuilder dep = new StringBuilder();
         for (Map.Entry<String, Double> e : s.depositKg().entrySet()) {
             if (e.getValue() > 0 || e.getKey().equals(s.targetMetal())) {
-                dep.append(dep.length() == 0 ? "" : ", ").append(String.format(Locale.ROOT, "%s %.4g g", e.getKey(),
-                        e.getValue() * 1000));
+                dep.append(dep.length() == 0 ? "" : ", ").append(e.getKey()).append(' ')
+                        .append(SummaryText.mass(e.getValue()));
             }
         }
         out.add(new Figure("Deposit", dep.length() == 0 ? "none" : dep.toString(),
                 "Metal deposited on the cathode, from the charge each deposition reaction passed (Faraday's law)."));
-        if (s.depositKg().size() > 1 && s.depositTotalKg() > 0 && s.targetMetal() != null) {
-            out.add(new Figure("Purity", String.format(Locale.ROOT, "%.3f %% %s",
-                    100 * s.purity().getOrDefault(s.targetMetal(), 0.0), s.targetMetal()),
+        if (s.depositKg().values().stream().filter(kg -> kg > 0).count() > 1 && s.targetMetal() != null) {
+            out.add(new Figure("Purity", SummaryText.massFraction(s.purity().getOrDefault(s.targetMetal(), 0.0))
+                    + " " + s.targetMetal(),
                     "Mass share of the target metal in the deposit."));
         }
         if (s.targetMetal() != null) {

@@ -34,6 +34,7 @@ final class SummaryPanel extends JPanel implements Scrollable {
     private final List<WrapText> values = new ArrayList<>();
     private final JLabel where = new JLabel("Where the charge went");
     private final List<WrapText> shares = new ArrayList<>();
+    private final JPanel sections = new JPanel();
     private final WrapText empty = new WrapText("Run the scenario (F5) or move a slider: the deposit, current"
             + " efficiency, specific energy, time to short and the deposit's form appear here.", "muted.foreground",
             0, Font.PLAIN, 330);
@@ -67,10 +68,24 @@ final class SummaryPanel extends JPanel implements Scrollable {
             shares.add(s);
             add(s, at(row++, 0, 2, 3));
         }
+        sections.setOpaque(false);
+        sections.setLayout(new javax.swing.BoxLayout(sections, javax.swing.BoxLayout.Y_AXIS));
+        add(sections, at(row++, 0, 2, 12));
         GridBagConstraints c = at(row, 0, 2, 0);
         c.weighty = 1;
         add(new JLabel(), c);
         clear();
+    }
+
+    /**
+     * Adds a section under the summary (the uncertainty ranges), shown whatever the run.
+     *
+     * @param section the section
+     */
+    void addSection(javax.swing.JComponent section) {
+        section.setAlignmentX(LEFT_ALIGNMENT);
+        sections.add(section);
+        revalidate();
     }
 
     /** Shows that nothing has run yet. */

@@ -160,7 +160,7 @@ class ConductivityTest {
         return m;
     }
 
-    private static double modelMSPerCm(Point p) {
+    static double modelMSPerCm(Point p) {
         return Conductivity.of(LIB, composition(p.solution(), p.molPerL()), p.tempK()) * 10;
     }
 
@@ -195,13 +195,17 @@ class ConductivityTest {
         double[][] cases = {{2.87, 1.56}, {1.83, 2.14}, {1.43, 1.88}, {1.09, 1.28}};
         String[] solutions = {"HCl", "NaCl", "KCl", "H2SO4"};
         for (int i = 0; i < solutions.length; i++) {
-            Map<String, Double> comp = composition(solutions[i], cases[i][0]);
-            double k20 = Conductivity.of(LIB, comp, T20);
-            double k25 = Conductivity.of(LIB, comp, T25);
-            double k30 = Conductivity.of(LIB, comp, 303.15);
-            double percentPerK = 100 * (k30 - k20) / 10 / k25;
-            assertEquals(cases[i][1], percentPerK, 0.2, solutions[i]);
+            assertEquals(cases[i][1], percentPerK(solutions[i], cases[i][0]), 0.2, solutions[i]);
         }
+    }
+
+    /** The model's temperature coefficient at 25 C (per cent of kappa(25 C) per kelvin, 20 to 30 C). */
+    static double percentPerK(String solution, double molPerL) {
+        Map<String, Double> comp = composition(solution, molPerL);
+        double k20 = Conductivity.of(LIB, comp, T20);
+        double k25 = Conductivity.of(LIB, comp, T25);
+        double k30 = Conductivity.of(LIB, comp, 303.15);
+        return 100 * (k30 - k20) / 10 / k25;
     }
 
     @Test
@@ -226,7 +230,7 @@ class ConductivityTest {
         assertEquals(0.621, 100 * 0.020 / kappa, 0.621 * 0.10);
     }
 
-    private static double sulfateBath(String metal, double metalMolPerL, double acidMolPerL, double celsius) {
+    static double sulfateBath(String metal, double metalMolPerL, double acidMolPerL, double celsius) {
         Map<String, Double> m = new LinkedHashMap<>();
         m.put(metal, metalMolPerL * 1000);
         m.put("SO4^2-", (metalMolPerL + acidMolPerL) * 1000);

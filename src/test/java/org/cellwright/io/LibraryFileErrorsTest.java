@@ -124,6 +124,20 @@ class LibraryFileErrorsTest {
     }
 
     @Test
+    void aRequiredSpeciesIsReadAndMustBeKnownAndSourced() throws Exception {
+        String with = GOOD.replace("alpha_c_source = \"Mattsson and Bockris\"\n",
+                "alpha_c_source = \"Mattsson and Bockris\"\nrequires = [\"Cl-\"]\nrequires_source = \"test value\"\n");
+        assertEquals(java.util.List.of("Cl-"), read(with).findReaction("Cu2+/Cu").orElseThrow().requires());
+        assertEquals(java.util.List.of(), read(GOOD).findReaction("Cu2+/Cu").orElseThrow().requires());
+        String unknown = with.replace("requires = [\"Cl-\"]", "requires = [\"Br-\"]");
+        LibraryFormatException e = refused(unknown);
+        assertEquals(lineOf(unknown, "requires = "), e.line());
+        assertTrue(e.getMessage().contains("unknown species 'Br-'"), e.getMessage());
+        LibraryFormatException unsourced = refused(with.replace("requires_source = \"test value\"\n", ""));
+        assertTrue(unsourced.getMessage().contains("requires: has no source"), unsourced.getMessage());
+    }
+
+    @Test
     void aWrongUnitIsRefused() {
         String text = GOOD.replace("\"0.714e-9 m2/s\"", "\"0.714e-9 m2\"");
         LibraryFormatException e = refused(text);

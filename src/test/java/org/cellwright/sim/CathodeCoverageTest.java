@@ -24,8 +24,14 @@ class CathodeCoverageTest {
     }
 
     /** The hydrogen overpotential (V, positive) at 500 A/m2 of hydrogen on a cathode with the given coverage. */
-    private static double hydrogenOverpotential(double coverage) {
-        Scenario sc = tinBath(25, 1.0);
+    static double hydrogenOverpotential(double coverage) {
+        return hydrogenOverpotential("stainless", coverage);
+    }
+
+    /** The same on a bare ({@code coverage} 0) or tinned sheet of the given substrate material. */
+    static double hydrogenOverpotential(String substrate, double coverage) {
+        Scenario sc = DepositScenarios.cell(DepositScenarios.tinChloride(25, 1.0, Map.of()), 0.01, substrate,
+                "graphite", 0.01, 0.03, 100e-6, 1.0, 3600, 10, "Sn");
         ReactionNetwork net = ReactionNetwork.of(DepositScenarios.LIB, sc);
         ReactionSlot hydrogen = net.cathodeSlots().stream().filter(s -> s.reaction().name().equals("H+/H2"))
                 .findFirst().orElseThrow();

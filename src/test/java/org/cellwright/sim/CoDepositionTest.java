@@ -19,7 +19,7 @@ class CoDepositionTest {
     private static final double F = 96485.33212331001;
 
     /** An acid tin sulfate bath (0.2 M Sn2+, 1 M H+) with a noble impurity. */
-    private static Map<String, Double> tinSulfate(String impurity, double molPerM3) {
+    static Map<String, Double> tinSulfate(String impurity, double molPerM3) {
         Map<String, Double> c = new LinkedHashMap<>();
         c.put("Sn2+", 200.0);
         c.put("H+", 1000.0);

@@ -34,7 +34,7 @@ class DepositCorrosionTest {
      * mass-transfer limit a few tens of millivolts from tin's equilibrium potential: the test isolates mass
      * transfer (with 1 A/m2 the reduction there is under mixed control, 89 % of the limit).
      */
-    private static Scenario tinThen(double laterAmps) {
+    static Scenario tinThen(double laterAmps) {
         Map<String, Double> c = new LinkedHashMap<>();
         c.put("Sn2+", 200.0);
         c.put("Sn4+", 15.0);
@@ -105,12 +105,12 @@ class DepositCorrosionTest {
 
     @Test
     void twoReductionsOfCopperShareTheOneCu2FluxToTheCathode() {
-        // copper sulfate far above its limiting current, built-in library: Cu2+ + 2e- = Cu and Cu2+ + e- = Cu+
-        // both draw on Cu2+
+        // copper chloride far above its limiting current, built-in library: Cu2+ + 2e- = Cu and Cu2+ + e- = Cu+
+        // (Cu+ stable as a chloro complex) both draw on Cu2+
         Map<String, Double> c = new LinkedHashMap<>();
         c.put("Cu2+", 50.0);
         c.put("H+", 1000.0);
-        c.put("SO4^2-", 550.0);
+        c.put("Cl-", 1100.0);
         double delta = 100e-6;
         Scenario sc = DepositScenarios.cell(c, 0.002, "stainless", "platinum", 0.01, 0.03, delta, 3.0, 3600, 300, "Cu");
         RunResult r = DepositScenarios.run(sc);

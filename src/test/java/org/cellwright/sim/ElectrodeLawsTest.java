@@ -34,7 +34,7 @@ class ElectrodeLawsTest {
                 List.of(), List.of());
     }
 
-    private static OperatingPoint prepared(Scenario sc, ChemLibrary lib, double t) {
+    static OperatingPoint prepared(Scenario sc, ChemLibrary lib, double t) {
         ReactionNetwork net = ReactionNetwork.of(lib, sc);
         CellRates rates = new CellRates(sc, net);
         OperatingPoint op = rates.operatingPoint();
@@ -42,7 +42,7 @@ class ElectrodeLawsTest {
         return op;
     }
 
-    private static int slot(OperatingPoint op, String name) {
+    static int slot(OperatingPoint op, String name) {
         for (int k = 0; k < op.net.cathodeSlots.size(); k++) {
             if (op.net.cathodeSlots.get(k).reaction().name().equals(name)) {
                 return k;

@@ -16,7 +16,7 @@ class MassTransferTest {
 
     private static final double D_CU = 0.714e-9;
 
-    private static double concentrationAt(RunResult r, double t) {
+    static double concentrationAt(RunResult r, double t) {
         int j = r.speciesNames().indexOf("Cu2+");
         for (TracePoint p : r.trace()) {
             if (Math.abs(p.timeS() - t) < 1e-6) {
@@ -81,7 +81,7 @@ class MassTransferTest {
                 .state().targetEfficiency();
     }
 
-    private static double efficiencyNear(RunResult r, double t) {
+    static double efficiencyNear(RunResult r, double t) {
         List<TracePoint> tr = r.trace();
         TracePoint best = tr.get(0);
         for (TracePoint p : tr) {
@@ -93,7 +93,7 @@ class MassTransferTest {
         return best.state().targetEfficiency();
     }
 
-    private static double interpolate(RunResult r, double t) {
+    static double interpolate(RunResult r, double t) {
         int j = r.speciesNames().indexOf("Cu2+");
         List<TracePoint> tr = r.trace();
         for (int i = 1; i < tr.size(); i++) {

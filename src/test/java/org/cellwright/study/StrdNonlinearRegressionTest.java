@@ -31,19 +31,8 @@ class StrdNonlinearRegressionTest {
     @CsvSource({"Misra1a, 1", "Misra1a, 2", "Thurber, 1", "Thurber, 2"})
     void findsTheCertifiedValuesAndStandardDeviations(String name, int start) throws Exception {
         StrdDataset d = StrdDataset.load(name);
-        BiFunction<double[], Double, Double> model = name.equals("Misra1a") ? MISRA1A : THURBER;
         double[] from = start == 1 ? d.start1() : d.start2();
-        List<FreeParameter> params = new ArrayList<>();
-        for (int j = 0; j < from.length; j++) {
-            params.add(FreeParameter.of("b" + (j + 1), from[j], ParameterScale.LINEAR));
-        }
-        FitOutcome o = new LeastSquaresFit(params, b -> {
-            double[] r = new double[d.y().length];
-            for (int i = 0; i < r.length; i++) {
-                r[i] = model.apply(b, d.x()[i]) - d.y()[i];
-            }
-            return r;
-        }, LeastSquaresFit.Options.forFormula(), FitMonitor.NONE).fit();
+        FitOutcome o = fit(d, start);
 
         assertTrue(o.converged(), name + " did not converge");
         for (int j = 0; j < from.length; j++) {
@@ -59,5 +48,26 @@ class StrdNonlinearRegressionTest {
         assertEquals(d.residualSumOfSquares(), o.sumOfSquares(), 1e-8 * d.residualSumOfSquares());
         assertEquals(d.residualSd(), o.residualSd(), 1e-8 * d.residualSd());
         assertEquals(d.y().length - from.length, o.degreesOfFreedom());
+    }
+
+    /**
+     * @param d the NIST dataset (Misra1a or Thurber)
+     * @param start NIST's starting point, 1 or 2
+     * @return the fit from that start, with the finite-difference Jacobian of the engine fits
+     */
+    static FitOutcome fit(StrdDataset d, int start) {
+        BiFunction<double[], Double, Double> model = d.name().equals("Misra1a") ? MISRA1A : THURBER;
+        double[] from = start == 1 ? d.start1() : d.start2();
+        List<FreeParameter> params = new ArrayList<>();
+        for (int j = 0; j < from.length; j++) {
+            params.add(FreeParameter.of("b" + (j + 1), from[j], ParameterScale.LINEAR));
+        }
+        return new LeastSquaresFit(params, b -> {
+            double[] r = new double[d.y().length];
+            for (int i = 0; i < r.length; i++) {
+                r[i] = model.apply(b, d.x()[i]) - d.y()[i];
+            }
+            return r;
+        }, LeastSquaresFit.Options.forFormula(), FitMonitor.NONE).fit();
     }
 }

@@ -92,6 +92,7 @@ class CellwrightWindowSmokeTest {
         assertEquals(Playback.State.PAUSED, edt(() -> window.director().state()), "and does not resume the run");
         edt(() -> {
             title.setText(titleText);
+            title.setCaretPosition(0);
             window.knobs().slider(Knob.GAP).requestFocusInWindow();
             return null;
         });
