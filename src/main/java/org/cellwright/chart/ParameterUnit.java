@@ -11,7 +11,7 @@ import java.util.Locale;
  * @param factor shown value = SI value * factor + offset
  * @param offset see {@code factor}
  */
-record ParameterUnit(String symbol, double factor, double offset) {
+public record ParameterUnit(String symbol, double factor, double offset) {
 
     /** Kelvin at 0 degrees C (source: SI Brochure, 9th ed., 2.3.1). */
     private static final double ZERO_CELSIUS_K = 273.15;
@@ -20,7 +20,7 @@ record ParameterUnit(String symbol, double factor, double offset) {
      * @param key a scenario key (dotted path)
      * @return its display unit
      */
-    static ParameterUnit of(String key) {
+    public static ParameterUnit of(String key) {
         String last = key.substring(key.lastIndexOf('.') + 1);
         boolean composition = key.startsWith("electrolyte.composition");
         if (composition) {
@@ -50,7 +50,7 @@ record ParameterUnit(String symbol, double factor, double offset) {
      * @param si a value in SI units
      * @return the value in this unit with four significant digits, e.g. "149.8 um"
      */
-    String format(double si) {
+    public String format(double si) {
         if (!Double.isFinite(si)) {
             return si > 0 ? "+inf" : "-inf";
         }

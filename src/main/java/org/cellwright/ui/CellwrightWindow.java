@@ -41,6 +41,7 @@ public final class CellwrightWindow implements WindowActions.Commands {
     private final StatusBar status = new StatusBar();
     private final FileCommands files = new FileCommands(dialogs, status, () -> this.session, () -> this.director,
             () -> this.dark);
+    private final LogCommands logs = new LogCommands(frame, status, () -> this.session, () -> this.director);
     private final Studies studies = new Studies(frame, () -> this.session);
     private final boolean exitOnClose;
     private RunDirector director;
@@ -100,6 +101,7 @@ public final class CellwrightWindow implements WindowActions.Commands {
         });
         javax.swing.JMenuBar menus = actions.menuBar();
         menus.add(studies.menu(), menus.getMenuCount() - 1);
+        logs.install(menus, actions.exports);
         frame.setJMenuBar(menus);
         actions.bind(frame.getRootPane());
         actions.refresh(null, false);
@@ -166,9 +168,11 @@ public final class CellwrightWindow implements WindowActions.Commands {
         studies.attach(lib, director, form, summary, status);
         comparisonPanel = new ComparisonPanel(comparison, actions.pin, e -> director.setReference(e));
 
+        grid.onNewCharts(logs::chartsChanged);
         JComponent all = WindowLayout.arrange(form, knobs, bar, grid, events, strip, tabs, summary, cautions,
                 comparisonPanel);
 
+        logs.ready(lib, tabs);
         frame.getContentPane().removeAll();
         frame.getContentPane().add(all, BorderLayout.CENTER);
         frame.getContentPane().add(status, BorderLayout.SOUTH);
@@ -190,6 +194,7 @@ public final class CellwrightWindow implements WindowActions.Commands {
 
     private void refreshActions() {
         actions.refresh(director == null ? null : director.state(), session != null && session.scenario() != null);
+        logs.refresh();
     }
 
     private void titleChanged(String name, boolean changed) {
@@ -235,6 +240,11 @@ public final class CellwrightWindow implements WindowActions.Commands {
     /** @return the form (for the smoke test) */
     ScenarioForm form() {
         return form;
+    }
+
+    /** @return the measured-log and report commands (for the smoke test) */
+    LogCommands logs() {
+        return logs;
     }
 
     /** @return the window's actions (for the smoke test) */

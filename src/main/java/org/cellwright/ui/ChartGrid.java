@@ -40,6 +40,7 @@ final class ChartGrid extends JPanel {
     private final transient Runnable drawn;
     private final List<ChartPanel> panels = new ArrayList<>();
     private transient RunCharts charts;
+    private transient java.util.function.Consumer<RunCharts> chartsListener = c -> { };
 
     /**
      * @param shown the points the charts show now (for the tooltips)
@@ -73,8 +74,14 @@ final class ChartGrid extends JPanel {
             panels.add(p);
             add(p);
         }
+        chartsListener.accept(c);
         revalidate();
         repaint();
+    }
+
+    /** @param l hears of every new set of charts (e.g. to draw a measured log on them) */
+    void onNewCharts(java.util.function.Consumer<RunCharts> l) {
+        chartsListener = l;
     }
 
     /** @return how many charts the grid shows */

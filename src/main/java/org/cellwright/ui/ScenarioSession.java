@@ -114,6 +114,20 @@ final class ScenarioSession {
         }
     }
 
+    /**
+     * Opens scenario text made from the one shown (a fitted scenario), not tied to a file and marked changed,
+     * so that saving asks for a file.
+     *
+     * @param text the text
+     * @param displayName the name to show
+     * @throws ScenarioException when the text is not valid TOML (then nothing changes)
+     */
+    void openDerived(String text, String displayName) throws ScenarioException {
+        open(text, displayName, null);
+        changed = true;
+        title.titleChanged(name, true);
+    }
+
     /** @return the file the scenario is saved in, or null */
     Path file() {
         return file;

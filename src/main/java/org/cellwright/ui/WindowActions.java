@@ -76,6 +76,8 @@ final class WindowActions {
     final Action shortcuts;
     final Action about;
     private final List<Action> exportKinds = new ArrayList<>();
+    /** The File > Export menu, once the menu bar is made (other commands add their exports to it). */
+    JMenu exports;
 
     WindowActions(Commands c) {
         newFrom = action("New from template...", "Start a new scenario from a shipped one", key(KeyEvent.VK_N, CTRL),
@@ -119,6 +121,8 @@ final class WindowActions {
         {"Ctrl+N", "new scenario from a shipped one"},
         {"Ctrl+E", "export the run (PNG, SVG, CSV, JSON)"},
         {"Ctrl+D", "switch light and dark"},
+        {"Ctrl+L", "load a measured log (CSV), drawn over the charts"},
+        {"Ctrl+F", "fit the scenario to the measured log"},
         {"F1", "this list"},
         {"Ctrl+Q", "quit"},
     };
@@ -154,6 +158,7 @@ final class WindowActions {
         exports.addSeparator();
         exportKinds.forEach(exports::add);
         file.add(exports);
+        this.exports = exports;
         file.addSeparator();
         file.add(quit);
         JMenu runMenu = new JMenu("Run");
