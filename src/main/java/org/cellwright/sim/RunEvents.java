@@ -72,8 +72,7 @@ final class RunEvents {
             if (shortTimeS != null) {
                 return -1.0;
             }
-            op.unpack(t, y);
-            return dendrite.gapM() - DendriteGrowth.tipHeightM(op);
+            return dendrite.gapM() - op.tipHeightM(y);
         }, stop, (t, y, inc) -> {
             if (shortTimeS != null) {
                 return null;

@@ -38,19 +38,11 @@ class NearLimitEventTest {
 
     @Test
     void aShareSwingingAboutTheThresholdIsLoggedOnceAndLeftBelowTheBand() {
-        double limitA = limitingCurrentA();
         // the set current as a share of the limiting current: up through 90 %, three swings between 93 % and
         // 87 % (inside the band), then down through 85 %
-        double[][] points = {{0, 0.80, 0}, {600, 0.80, 0}, {1200, 0.93, 1}, {1500, 0.93, 0}, {2100, 0.87, 1},
-            {2400, 0.87, 0}, {3000, 0.93, 1}, {3300, 0.93, 0}, {3900, 0.87, 1}, {4200, 0.87, 0}, {4800, 0.93, 1},
-            {5100, 0.93, 0}, {5700, 0.70, 1}};
-        List<SetPoint> schedule = new ArrayList<>();
-        for (double[] p : points) {
-            schedule.add(new SetPoint(p[0], p[1] * limitA, p[2] > 0));
-        }
-        Scenario sc = bath(6600).withSupply(new PowerSupply(ControlMode.CURRENT, 0, 0, Double.POSITIVE_INFINITY,
-                Double.POSITIVE_INFINITY, schedule));
-        RunResult r = CellSimulation.withDefaults().run(sc, LIB, null);
+        RunResult r = runShares(6600, new double[][] {{0, 0.80, 0}, {600, 0.80, 0}, {1200, 0.93, 1},
+            {1500, 0.93, 0}, {2100, 0.87, 1}, {2400, 0.87, 0}, {3000, 0.93, 1}, {3300, 0.93, 0}, {3900, 0.87, 1},
+            {4200, 0.87, 0}, {4800, 0.93, 1}, {5100, 0.93, 0}, {5700, 0.70, 1}});
         List<RunEvent> near = r.events().stream().filter(e -> e.kind() == RunEvent.Kind.NEAR_LIMITING_CURRENT)
                 .toList();
         List<RunEvent> below = r.events().stream().filter(e -> e.kind() == RunEvent.Kind.BELOW_LIMITING_CURRENT)
@@ -69,22 +61,15 @@ class NearLimitEventTest {
 
     @Test
     void aRealReturnFromTheLimitIsLoggedEveryTime() {
-        double limitA = limitingCurrentA();
         // twice up to 95 % and down to 70 %: each swing crosses the whole band
-        double[][] points = {{0, 0.70, 0}, {600, 0.70, 0}, {1200, 0.95, 1}, {1500, 0.95, 0}, {2100, 0.70, 1},
-            {2400, 0.70, 0}, {3000, 0.95, 1}, {3300, 0.95, 0}, {3900, 0.70, 1}};
-        List<SetPoint> schedule = new ArrayList<>();
-        for (double[] p : points) {
-            schedule.add(new SetPoint(p[0], p[1] * limitA, p[2] > 0));
-        }
-        Scenario sc = bath(4500).withSupply(new PowerSupply(ControlMode.CURRENT, 0, 0, Double.POSITIVE_INFINITY,
-                Double.POSITIVE_INFINITY, schedule));
-        RunResult r = CellSimulation.withDefaults().run(sc, LIB, null);
+        RunResult r = runShares(4500, new double[][] {{0, 0.70, 0}, {600, 0.70, 0}, {1200, 0.95, 1},
+            {1500, 0.95, 0}, {2100, 0.70, 1}, {2400, 0.70, 0}, {3000, 0.95, 1}, {3300, 0.95, 0}, {3900, 0.70, 1}});
         List<RunEvent.Kind> kinds = r.events().stream().map(RunEvent::kind)
                 .filter(k -> k == RunEvent.Kind.NEAR_LIMITING_CURRENT || k == RunEvent.Kind.BELOW_LIMITING_CURRENT)
                 .toList();
         assertEquals(List.of(RunEvent.Kind.NEAR_LIMITING_CURRENT, RunEvent.Kind.BELOW_LIMITING_CURRENT,
-                RunEvent.Kind.NEAR_LIMITING_CURRENT, RunEvent.Kind.BELOW_LIMITING_CURRENT), kinds, r.events().toString());
+                RunEvent.Kind.NEAR_LIMITING_CURRENT, RunEvent.Kind.BELOW_LIMITING_CURRENT), kinds,
+                r.events().toString());
     }
 
     @Test
@@ -111,6 +96,21 @@ class NearLimitEventTest {
                 || e.kind() == RunEvent.Kind.BELOW_LIMITING_CURRENT).count();
         assertTrue(limitEvents <= 2, "at most a couple of limit events: " + r.events());
         assertEquals(RunEvent.Kind.END, r.events().get(r.events().size() - 1).kind(), "the run reaches its end");
+    }
+
+    /**
+     * @param points the schedule as {time (s), set current as a share of the limiting current, 1 to ramp}
+     * @return a run of the copper bath under that schedule
+     */
+    private static RunResult runShares(double durationS, double[][] points) {
+        double limitA = limitingCurrentA();
+        List<SetPoint> schedule = new ArrayList<>();
+        for (double[] p : points) {
+            schedule.add(new SetPoint(p[0], p[1] * limitA, p[2] > 0));
+        }
+        Scenario sc = bath(durationS).withSupply(new PowerSupply(ControlMode.CURRENT, 0, 0, Double.POSITIVE_INFINITY,
+                Double.POSITIVE_INFINITY, schedule));
+        return CellSimulation.withDefaults().run(sc, LIB, null);
     }
 
     /** @return the copper's limiting current in this bath (A), from the share a run at 1 A reports */
