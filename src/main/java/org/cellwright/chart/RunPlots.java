@@ -11,6 +11,7 @@ import org.jfree.chart.renderer.xy.XYLineAndShapeRenderer;
 import org.jfree.chart.title.LegendTitle;
 import org.jfree.chart.ui.RectangleEdge;
 import org.jfree.chart.ui.RectangleInsets;
+import org.jfree.data.xy.XYDataset;
 
 /**
  * Builds the six run charts' plots: datasets, axes with their units and renderers, without colours (those
@@ -45,18 +46,11 @@ final class RunPlots {
     }
 
     static JFreeChart concentrations(RunChartModel m) {
-        XYPlot plot = plot(m, "concentration (mol/L)");
-        plot.setDataset(LIVE, m.concentrations());
-        plot.setRenderer(LIVE, lines());
-        plot.setRenderer(REFERENCE, referenceLines());
-        return chart("Bath composition", plot);
+        return chart("Bath composition", withRun(plot(m, "concentration (mol/L)"), m.concentrations()));
     }
 
     static JFreeChart voltage(RunChartModel m) {
-        XYPlot plot = plot(m, "voltage (V)");
-        plot.setDataset(LIVE, m.cellVoltage());
-        plot.setRenderer(LIVE, lines());
-        plot.setRenderer(REFERENCE, referenceLines());
+        XYPlot plot = withRun(plot(m, "voltage (V)"), m.cellVoltage());
         plot.setDataset(BANDS, m.voltageParts());
         DeviationRenderer bands = new DeviationRenderer(false, false);
         bands.setAlpha(1f);
@@ -68,9 +62,7 @@ final class RunPlots {
     static JFreeChart current(RunChartModel m) {
         XYPlot plot = plot(m, "current (A)");
         plot.getRangeAxis().setUpperMargin(CURRENT_HEADROOM);
-        plot.setDataset(LIVE, m.current());
-        plot.setRenderer(LIVE, lines());
-        plot.setRenderer(REFERENCE, referenceLines());
+        withRun(plot, m.current());
         NumberAxis eff = new NumberAxis("current efficiency (%)");
         eff.setRange(0, EFFICIENCY_AXIS_MAX);
         eff.setAutoRange(false);
@@ -85,30 +77,32 @@ final class RunPlots {
     }
 
     static JFreeChart deposit(RunChartModel m) {
-        XYPlot plot = plot(m, "deposit (g)");
-        plot.setDataset(LIVE, m.deposit());
-        plot.setRenderer(LIVE, lines());
-        plot.setRenderer(REFERENCE, referenceLines());
-        return chart("Deposit per metal", plot);
+        return chart("Deposit per metal", withRun(plot(m, "deposit (g)"), m.deposit()));
     }
 
     static JFreeChart temperature(RunChartModel m) {
         XYPlot plot = plot(m, "temperature (\u00b0C)");
         ((NumberAxis) plot.getRangeAxis()).setAutoRangeIncludesZero(false);
         plot.getRangeAxis().setAutoRangeMinimumSize(TEMPERATURE_MIN_SPAN_C);
-        plot.setDataset(LIVE, m.temperature());
-        plot.setRenderer(LIVE, lines());
-        plot.setRenderer(REFERENCE, referenceLines());
-        return chart("Bath temperature", plot);
+        return chart("Bath temperature", withRun(plot, m.temperature()));
     }
 
     static JFreeChart dendrite(RunChartModel m) {
         XYPlot plot = plot(m, "tip height (mm)");
         plot.getRangeAxis().setAutoRange(false);
-        plot.setDataset(LIVE, m.dendrite());
+        return chart("Dendrite tip against the gap", withRun(plot, m.dendrite()));
+    }
+
+    /**
+     * Puts the live run's series on {@code plot} (drawn as lines) and readies the reference run's renderer
+     * (lines without a legend entry); the axes are set up before, so that their auto-range settings hold
+     * when the data arrive.
+     */
+    private static XYPlot withRun(XYPlot plot, XYDataset live) {
+        plot.setDataset(LIVE, live);
         plot.setRenderer(LIVE, lines());
         plot.setRenderer(REFERENCE, referenceLines());
-        return chart("Dendrite tip against the gap", plot);
+        return plot;
     }
 
     private static XYPlot plot(RunChartModel m, String rangeLabel) {

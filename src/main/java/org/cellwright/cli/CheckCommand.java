@@ -56,17 +56,7 @@ public final class CheckCommand implements Callable<Integer> {
 
     @Override
     public Integer call() {
-        PrintWriter out = spec.commandLine().getOut();
-        PrintWriter err = spec.commandLine().getErr();
-        try {
-            return check(out, err);
-        } catch (RuntimeException e) {
-            err.println("cellwright check: internal failure: " + oneLine(e));
-            return Main.INTERNAL_FAILURE;
-        } finally {
-            out.flush();
-            err.flush();
-        }
+        return CommandRun.of("check", "output").failureMessageOnOneLine().call(spec, this::check);
     }
 
     private int check(PrintWriter out, PrintWriter err) {
@@ -86,10 +76,5 @@ public final class CheckCommand implements Callable<Integer> {
             }
         }
         return invalid ? Main.BAD_INPUT : 0;
-    }
-
-    private static String oneLine(Throwable e) {
-        String message = e.getMessage() == null ? e.getClass().getSimpleName() : e.getMessage();
-        return message.replaceAll("\\s*\\R\\s*", " ");
     }
 }

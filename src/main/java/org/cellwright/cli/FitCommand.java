@@ -86,27 +86,11 @@ public final class FitCommand implements Callable<Integer> {
 
     @Override
     public Integer call() {
-        PrintWriter out = spec.commandLine().getOut();
-        PrintWriter err = spec.commandLine().getErr();
-        try {
-            return fit(out, err);
-        } catch (IOException e) {
-            err.println("cellwright fit: cannot write output: " + e.getMessage());
-            return Main.BAD_INPUT;
-        } catch (RuntimeException e) {
-            err.println("cellwright fit: internal failure: " + e);
-            return Main.INTERNAL_FAILURE;
-        } finally {
-            out.flush();
-            err.flush();
-        }
+        CommandRun command = CommandRun.of("fit", "output");
+        return command.call(spec, (out, err) -> command.chartNameOk(chart, err) ? fit(out, err) : Main.BAD_INPUT);
     }
 
-    private int fit(PrintWriter out, PrintWriter err) throws IOException {
-        if (chart != null && !(chart.toString().endsWith(".png") || chart.toString().endsWith(".svg"))) {
-            err.println("cellwright fit: --chart " + chart + ": the file must end in .png or .svg");
-            return Main.BAD_INPUT;
-        }
+    private int fit(PrintWriter out, PrintWriter err) throws IOException, ScenarioException, RunLogException {
         if (maxIterations < 1) {
             err.println("cellwright fit: --max-iterations must be at least 1, got " + maxIterations);
             return Main.BAD_INPUT;
@@ -128,20 +112,10 @@ public final class FitCommand implements Callable<Integer> {
             weightMap.put(w.substring(0, eq).strip(), v);
         }
         ChemLibrary lib = LibraryReader.builtIn();
-        ScenarioTemplate template;
-        MeasuredLog log;
-        try {
-            template = ScenarioTemplate.load(file, sets, free, lib);
-            RunLogReader.Result read = new RunLogReader(lib).read(logFile);
-            read.warnings().forEach(p -> err.println(p.format()));
-            log = read.log();
-        } catch (ScenarioException e) {
-            e.problems().forEach(p -> err.println(p.format()));
-            return Main.BAD_INPUT;
-        } catch (RunLogException e) {
-            e.problems().forEach(p -> err.println(p.format()));
-            return Main.BAD_INPUT;
-        }
+        ScenarioTemplate template = ScenarioTemplate.load(file, sets, free, lib);
+        RunLogReader.Result read = new RunLogReader(lib).read(logFile);
+        read.warnings().forEach(p -> err.println(p.format()));
+        MeasuredLog log = read.log();
         template.warnings().forEach(p -> err.println(p.format()));
         LogFitResult result;
         try {

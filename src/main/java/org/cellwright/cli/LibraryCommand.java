@@ -1,6 +1,7 @@
 package org.cellwright.cli;
 
 import java.io.PrintWriter;
+import java.io.UncheckedIOException;
 import java.util.ArrayList;
 import java.util.LinkedHashMap;
 import java.util.List;
@@ -40,22 +41,28 @@ public final class LibraryCommand implements Callable<Integer> {
     CommandLine.Model.CommandSpec spec;
 
     @Override
-    public Integer call() throws JsonProcessingException {
+    public Integer call() {
+        return CommandRun.of("library", "output").call(spec, this::print);
+    }
+
+    private int print(PrintWriter out, PrintWriter err) {
         ChemLibrary library;
         try {
             library = LibraryReader.builtIn();
         } catch (IllegalStateException e) {
-            spec.commandLine().getErr().println("cellwright library: " + e.getMessage());
+            err.println("cellwright library: " + e.getMessage());
             return Main.INTERNAL_FAILURE;
         }
-        PrintWriter out = spec.commandLine().getOut();
         if (json) {
             ObjectMapper mapper = new ObjectMapper().enable(SerializationFeature.INDENT_OUTPUT);
-            out.println(mapper.writeValueAsString(toJson(library)));
+            try {
+                out.println(mapper.writeValueAsString(toJson(library)));
+            } catch (JsonProcessingException e) {
+                throw new UncheckedIOException(e);
+            }
         } else {
             new LibraryTable(out).print(library);
         }
-        out.flush();
         return 0;
     }
 

@@ -37,31 +37,19 @@ public final class MakeupCommand implements Callable<Integer> {
 
     @Override
     public Integer call() {
-        PrintWriter out = spec.commandLine().getOut();
-        PrintWriter err = spec.commandLine().getErr();
+        return CommandRun.of("makeup", "output").call(spec, this::makeup);
+    }
+
+    private int makeup(PrintWriter out, PrintWriter err) throws ScenarioException {
+        Feed feed = FeedReader.read(file);
+        MakeupResult r;
         try {
-            Feed feed;
-            try {
-                feed = FeedReader.read(file);
-            } catch (ScenarioException e) {
-                e.problems().forEach(p -> err.println(p.format()));
-                return Main.BAD_INPUT;
-            }
-            MakeupResult r;
-            try {
-                r = BathMakeup.compute(feed);
-            } catch (IllegalArgumentException e) {
-                err.println(e.getMessage());
-                return Main.BAD_INPUT;
-            }
-            MakeupWriter.lines(file.getFileName().toString(), r).forEach(out::println);
-            return 0;
-        } catch (RuntimeException e) {
-            err.println("cellwright makeup: internal failure: " + e);
-            return Main.INTERNAL_FAILURE;
-        } finally {
-            out.flush();
-            err.flush();
+            r = BathMakeup.compute(feed);
+        } catch (IllegalArgumentException e) {
+            err.println(e.getMessage());
+            return Main.BAD_INPUT;
         }
+        MakeupWriter.lines(file.getFileName().toString(), r).forEach(out::println);
+        return 0;
     }
 }

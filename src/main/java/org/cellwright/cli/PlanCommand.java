@@ -70,23 +70,10 @@ public final class PlanCommand implements Callable<Integer> {
 
     @Override
     public Integer call() {
-        PrintWriter stdout = spec.commandLine().getOut();
-        PrintWriter err = spec.commandLine().getErr();
-        try {
-            return plan(stdout, err);
-        } catch (IOException e) {
-            err.println("cellwright plan: cannot write " + out + ": " + e.getMessage());
-            return Main.BAD_INPUT;
-        } catch (RuntimeException e) {
-            err.println("cellwright plan: internal failure: " + e);
-            return Main.INTERNAL_FAILURE;
-        } finally {
-            stdout.flush();
-            err.flush();
-        }
+        return CommandRun.of("plan", String.valueOf(out)).call(spec, this::plan);
     }
 
-    private int plan(PrintWriter stdout, PrintWriter err) throws IOException {
+    private int plan(PrintWriter stdout, PrintWriter err) throws IOException, ScenarioException {
         double massKg;
         try {
             Quantity q = UnitParser.parse(deposit, Dimension.MASS);
@@ -110,14 +97,7 @@ public final class PlanCommand implements Callable<Integer> {
             return Main.BAD_INPUT;
         }
         ChemLibrary lib = LibraryReader.builtIn();
-        ScenarioReader.Result read;
-        try {
-            read = new ScenarioReader(lib).load(file, sets);
-        } catch (ScenarioException e) {
-            e.problems().forEach(p -> err.println(p.format()));
-            return Main.BAD_INPUT;
-        }
-        read.warnings().forEach(p -> err.println(p.format()));
+        ScenarioReader.Result read = CommandRun.scenario(lib, file, sets, err);
         ProgressLine progress = new ProgressLine(err, "plan", ProgressLine.onTerminal());
         SchedulePlan plan;
         try {

@@ -55,23 +55,10 @@ public final class ReportCommand implements Callable<Integer> {
 
     @Override
     public Integer call() {
-        PrintWriter stdout = spec.commandLine().getOut();
-        PrintWriter err = spec.commandLine().getErr();
-        try {
-            return report(stdout, err);
-        } catch (IOException e) {
-            err.println("cellwright report: cannot write " + out + ": " + e.getMessage());
-            return Main.BAD_INPUT;
-        } catch (RuntimeException e) {
-            err.println("cellwright report: internal failure: " + e);
-            return Main.INTERNAL_FAILURE;
-        } finally {
-            stdout.flush();
-            err.flush();
-        }
+        return CommandRun.of("report", String.valueOf(out)).call(spec, this::report);
     }
 
-    private int report(PrintWriter stdout, PrintWriter err) throws IOException {
+    private int report(PrintWriter stdout, PrintWriter err) throws IOException, ScenarioException {
         String name = out.getFileName() == null ? "" : out.getFileName().toString().toLowerCase(Locale.ROOT);
         boolean html = name.endsWith(".html") || name.endsWith(".htm");
         boolean pdf = name.endsWith(".pdf");
@@ -80,14 +67,7 @@ public final class ReportCommand implements Callable<Integer> {
             return Main.BAD_INPUT;
         }
         ChemLibrary lib = LibraryReader.builtIn();
-        ScenarioReader.Result read;
-        try {
-            read = new ScenarioReader(lib).load(file, sets);
-        } catch (ScenarioException e) {
-            e.problems().forEach(p -> err.println(p.format()));
-            return Main.BAD_INPUT;
-        }
-        read.warnings().forEach(p -> err.println(p.format()));
+        ScenarioReader.Result read = CommandRun.scenario(lib, file, sets, err);
         RunResult result;
         try {
             result = CellSimulation.withDefaults().run(read.scenario(), lib, null);

@@ -76,36 +76,13 @@ public final class RunCommand implements Callable<Integer> {
 
     @Override
     public Integer call() {
-        PrintWriter out = spec.commandLine().getOut();
-        PrintWriter err = spec.commandLine().getErr();
-        try {
-            return run(out, err);
-        } catch (IOException e) {
-            err.println("cellwright run: cannot write output: " + e.getMessage());
-            return Main.BAD_INPUT;
-        } catch (RuntimeException e) {
-            err.println("cellwright run: internal failure: " + e);
-            return Main.INTERNAL_FAILURE;
-        } finally {
-            out.flush();
-            err.flush();
-        }
+        CommandRun command = CommandRun.of("run", "output");
+        return command.call(spec, (out, err) -> command.chartNameOk(chart, err) ? run(out, err) : Main.BAD_INPUT);
     }
 
-    private int run(PrintWriter out, PrintWriter err) throws IOException {
-        if (chart != null && !(chart.toString().endsWith(".png") || chart.toString().endsWith(".svg"))) {
-            err.println("cellwright run: --chart " + chart + ": the file must end in .png or .svg");
-            return Main.BAD_INPUT;
-        }
+    private int run(PrintWriter out, PrintWriter err) throws IOException, ScenarioException {
         ChemLibrary lib = LibraryReader.builtIn();
-        ScenarioReader.Result read;
-        try {
-            read = new ScenarioReader(lib).load(file, sets);
-        } catch (ScenarioException e) {
-            e.problems().forEach(p -> err.println(p.format()));
-            return Main.BAD_INPUT;
-        }
-        read.warnings().forEach(p -> err.println(p.format()));
+        ScenarioReader.Result read = CommandRun.scenario(lib, file, sets, err);
         if (spread != null && (spread < 1 || spread > SpreadStudy.MAX_SAMPLES)) {
             err.println("cellwright run: --spread must be from 1 to " + SpreadStudy.MAX_SAMPLES + ", got " + spread);
             return Main.BAD_INPUT;

@@ -83,23 +83,11 @@ public final class SweepCommand implements Callable<Integer> {
 
     @Override
     public Integer call() {
-        PrintWriter stdout = spec.commandLine().getOut();
-        PrintWriter err = spec.commandLine().getErr();
-        try {
-            return sweep(stdout, err);
-        } catch (IOException e) {
-            err.println("cellwright sweep: cannot write output: " + e.getMessage());
-            return Main.BAD_INPUT;
-        } catch (RuntimeException e) {
-            err.println("cellwright sweep: internal failure: " + e);
-            return Main.INTERNAL_FAILURE;
-        } finally {
-            stdout.flush();
-            err.flush();
-        }
+        CommandRun command = CommandRun.of("sweep", "output");
+        return command.call(spec, (stdout, err) -> sweep(command, stdout, err));
     }
 
-    private int sweep(PrintWriter stdout, PrintWriter err) throws IOException {
+    private int sweep(CommandRun command, PrintWriter stdout, PrintWriter err) throws IOException, ScenarioException {
         SummaryFigure fig = SummaryFigure.find(figure).orElse(null);
         if (fig == null) {
             err.println("cellwright sweep: --figure " + figure + ": unknown figure; use one of "
@@ -107,8 +95,7 @@ public final class SweepCommand implements Callable<Integer> {
                     .collect(Collectors.joining(", ")));
             return Main.BAD_INPUT;
         }
-        if (chart != null && !(chart.toString().endsWith(".png") || chart.toString().endsWith(".svg"))) {
-            err.println("cellwright sweep: --chart " + chart + ": the file must end in .png or .svg");
+        if (!command.chartNameOk(chart, err)) {
             return Main.BAD_INPUT;
         }
         if (threads != null && threads < 1) {
@@ -129,13 +116,7 @@ public final class SweepCommand implements Callable<Integer> {
             return Main.BAD_INPUT;
         }
         ChemLibrary lib = LibraryReader.builtIn();
-        ScenarioVariants variants;
-        try {
-            variants = ScenarioVariants.of(lib, file, sets, axes);
-        } catch (ScenarioException e) {
-            e.problems().forEach(p -> err.println(p.format()));
-            return Main.BAD_INPUT;
-        }
+        ScenarioVariants variants = ScenarioVariants.of(lib, file, sets, axes);
         variants.base().warnings().forEach(p -> err.println(p.format()));
         Sweep sweep;
         try {

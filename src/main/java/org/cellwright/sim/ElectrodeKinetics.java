@@ -71,6 +71,11 @@ final class ElectrodeKinetics {
     private final double[] dcur;
     private final double[] share;
     private final double[] dShare;
+    /**
+     * Per reaction, whether the deposit has kinetics of its own (a second branch weighted by the coverage):
+     * fixed for the run, so the records are compared once here, not in every evaluation of the rates.
+     */
+    private final boolean[] depositBranch;
     private double f;
     private double hint;
     private final double[] scratch = new double[1];
@@ -100,6 +105,11 @@ final class ElectrodeKinetics {
         dic = new double[count];
         cur = new double[count];
         dcur = new double[count];
+        depositBranch = new boolean[count];
+        for (int k = 0; k < count; k++) {
+            Kinetics k2 = slots.get(k).depositKinetics();
+            depositBranch[k] = k2 != null && !k2.equals(slots.get(k).substrateKinetics());
+        }
         int species = 0;
         for (ReactionSlot s : slots) {
             for (int j : s.oxIndex()) {
@@ -166,7 +176,7 @@ final class ElectrodeKinetics {
             invIlC[k] = 1 / ilC;
             Kinetics k1 = s.substrateKinetics();
             Kinetics k2 = s.depositKinetics();
-            double theta = (k2 == null || k2.equals(k1)) ? 0 : coverage;
+            double theta = depositBranch[k] ? coverage : 0;
             boolean redissolves = metalShare != null && s.depositMetalIndex() >= 0;
             metalWeight[k] = redissolves ? metalShare[s.depositMetalIndex()] : 1;
             setBranch(k, k1, lnAo, lnAr, e, 1 - theta, 1 - theta, true, s, redissolves);

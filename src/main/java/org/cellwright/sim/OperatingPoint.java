@@ -161,15 +161,12 @@ final class OperatingPoint {
             double delta = Math.min(steadyLayerM, 2 * Math.sqrt(d * tEff / Math.PI));
             km[j] = d / delta;
         }
-        double thickness = 0;
         double moles = 0;
         List<Metal> metals = net.depositMetals();
         for (int m = 0; m < metals.size(); m++) {
-            double n = Math.max(y[layout.deposit0 + m], 0);
-            thickness += n * metals.get(m).molarVolumeM3PerMol();
-            moles += n;
+            moles += Math.max(y[layout.deposit0 + m], 0);
         }
-        thickness /= cathodeAreaM2;
+        double thickness = depositThicknessM(y);
         thicknessM = thickness;
         coverage = 1 - Math.exp(-thickness / COVERAGE_THICKNESS_M);
         for (int m = 0; m < metals.size(); m++) {
@@ -186,6 +183,25 @@ final class OperatingPoint {
         }
         cathode.prepare(c, free, km, tempK, coverage, metalShare);
         anode.prepare(cA, freeA, km, tempK, 0, null);
+    }
+
+    /** @return the mean thickness of the deposit in state {@code y} (m): its volume over the cathode's area */
+    private double depositThicknessM(double[] y) {
+        double volume = 0;
+        List<Metal> metals = net.depositMetals();
+        for (int m = 0; m < metals.size(); m++) {
+            volume += Math.max(y[layout.deposit0 + m], 0) * metals.get(m).molarVolumeM3PerMol();
+        }
+        return volume / cathodeAreaM2;
+    }
+
+    /**
+     * @return the height of the dendrite tip above the cathode in state {@code y} (m), as
+     *     {@link DendriteGrowth#tipHeightM} gives after {@link #unpack}, without the rest of the unpacking:
+     *     the short-circuit event asks for it at every check within each step
+     */
+    double tipHeightM(double[] y) {
+        return depositThicknessM(y) + Math.exp(y[layout.dendrite]);
     }
 
     /** The concentrations that set activities, after the speciation of the last conductivity call. */

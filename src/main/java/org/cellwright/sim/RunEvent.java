@@ -21,7 +21,7 @@ public record RunEvent(double timeS, Kind kind, String message) {
         CURRENT_LIMIT_LEFT,
         /** The target metal's deposition reached 90 % of its mass-transfer limit. */
         NEAR_LIMITING_CURRENT,
-        /** The target metal's deposition fell back below 90 % of its limit. */
+        /** The target metal's deposition fell back below 85 % of its limit, after reaching 90 % (a hysteresis band). */
         BELOW_LIMITING_CURRENT,
         /** A species reached its stop concentration. */
         SPECIES_TARGET,

@@ -22,7 +22,17 @@ final class RunEventDetector implements EventHandler {
         RunEvent describe(double t, double[] y, boolean increasing);
     }
 
+    /** Sets up a switching function that keeps state of its own, at the start of each integration segment. */
+    interface Start {
+        /**
+         * @param t0 start of the segment (s)
+         * @param y0 state then
+         */
+        void at(double t0, double[] y0);
+    }
+
     private final ToDoubleBiFunction<Double, double[]> g;
+    private final Start start;
     private final boolean stop;
     private final Wording wording;
     private final List<RunEvent> log;
@@ -40,7 +50,20 @@ final class RunEventDetector implements EventHandler {
     }
 
     RunEventDetector(ToDoubleBiFunction<Double, double[]> g, boolean stop, Wording wording, List<RunEvent> log) {
+        this(g, (t0, y0) -> { }, stop, wording, log);
+    }
+
+    /**
+     * @param g the switching function
+     * @param start called at the start of each integration segment, before g is first asked there
+     * @param stop whether the run stops at the event
+     * @param wording what goes into the log
+     * @param log the run's event log
+     */
+    RunEventDetector(ToDoubleBiFunction<Double, double[]> g, Start start, boolean stop, Wording wording,
+                     List<RunEvent> log) {
         this.g = g;
+        this.start = start;
         this.stop = stop;
         this.wording = wording;
         this.log = log;
@@ -53,7 +76,17 @@ final class RunEventDetector implements EventHandler {
 
     @Override
     public void init(double t0, double[] y0, double t) {
-        // nothing to set up
+        start.at(t0, y0);
+        forgetValues();
+    }
+
+    /**
+     * Forgets the values of g recalled so far: to be called when g itself changes (a switching function with
+     * hysteresis moves its threshold once the event has occurred), so that no value of the old g is given
+     * again at a time already asked about.
+     */
+    void forgetValues() {
+        java.util.Arrays.fill(recalledT, Double.NaN);
     }
 
     /**

@@ -10,7 +10,8 @@ import org.cellwright.cell.StopCondition;
 
 /**
  * The events a scenario asks for: its stop conditions, the supply's limits, the target metal nearing
- * its limiting current, and a dendrite bridging the gap ({@code g = gap - tip height}). Each is a
+ * its limiting current (with a hysteresis band, and only when its ion is in the bath at the start; see
+ * {@link #NEAR_LIMIT_BAND}), and a dendrite bridging the gap ({@code g = gap - tip height}). Each is a
  * {@link RunEventDetector} with a continuous switching function. A short stops the run when
  * {@code run.stop} contains "short"; otherwise the run goes on with the cell shorted.
  */
@@ -18,6 +19,19 @@ final class RunEvents {
 
     /** Share of the limiting current at which the run log says that mass transfer takes over. */
     static final double NEAR_LIMIT = 0.9;
+
+    /**
+     * Hysteresis of the near-limit event (share of the limiting current): once the target metal's deposition has
+     * reached {@link #NEAR_LIMIT}, the log says it fell back only when the share drops below
+     * {@code NEAR_LIMIT - NEAR_LIMIT_BAND} (85 %). Model choice. A share that wanders about 90 % (a current
+     * ramped or held near the limit, a bath warming and cooling, the operating point's own tolerance) would
+     * otherwise be logged at every swing, and the integrator would stop to locate each crossing. Five points of
+     * the limiting current are far above what round-off and the operating point's tolerance move the share
+     * (below 1e-6), and small enough that "falls back" still means the deposition is clearly off its limit.
+     * The large swings of a share whose ion is made at the cathode itself are kept out otherwise (see
+     * {@link #inTheBath}).
+     */
+    static final double NEAR_LIMIT_BAND = 0.05;
 
     private final Scenario sc;
     private final ReactionNetwork net;
@@ -58,8 +72,7 @@ final class RunEvents {
             if (shortTimeS != null) {
                 return -1.0;
             }
-            op.unpack(t, y);
-            return dendrite.gapM() - DendriteGrowth.tipHeightM(op);
+            return dendrite.gapM() - op.tipHeightM(y);
         }, stop, (t, y, inc) -> {
             if (shortTimeS != null) {
                 return null;
@@ -247,23 +260,51 @@ final class RunEvents {
             return;
         }
         ReactionSlot target = net.cathodeSlots.get(net.targetSlot);
+        if (target.oxIndex().length > 0 && !inTheBath(target.oxIndex()[0])) {
+            return;
+        }
         String ion = target.oxIndex().length > 0 ? net.species().get(target.oxIndex()[0]).name() : "metal ion";
-        all.add(new RunEventDetector((t, y) -> NEAR_LIMIT - limitRatio(t, y), false,
-                (t, y, inc) -> {
+        boolean[] near = new boolean[1];
+        RunEventDetector[] detector = new RunEventDetector[1];
+        detector[0] = new RunEventDetector((t, y) -> nearLimitThreshold(near[0]) - limitRatio(t, y),
+                (t0, y0) -> near[0] = limitRatio(t0, y0) >= nearLimitThreshold(near[0]),
+                false, (t, y, inc) -> {
+                    near[0] = !inc;
+                    detector[0].forgetValues();
                     if (t <= 0 || op.shorted) {
                         return null;
                     }
                     if (inc) {
                         return new RunEvent(t, RunEvent.Kind.BELOW_LIMITING_CURRENT, String.format(Locale.ROOT,
                                 "At %s the %s deposition falls back below %d %% of its limiting current.",
-                                RunClock.format(t), net.targetMetal.symbol(), Math.round(NEAR_LIMIT * 100)));
+                                RunClock.format(t), net.targetMetal.symbol(),
+                                Math.round((NEAR_LIMIT - NEAR_LIMIT_BAND) * 100)));
                     }
                     InstantState s = rates.snapshot(t, y);
                     return new RunEvent(t, RunEvent.Kind.NEAR_LIMITING_CURRENT, String.format(Locale.ROOT,
                             "At %s the %s supply to the cathode reaches %d %% of its limit (mass transfer);"
                                     + " from here more and more of the current goes to %s.",
                             RunClock.format(t), ion, Math.round(NEAR_LIMIT * 100), runnerUp(s)));
-                }, log));
+                }, log);
+        all.add(detector[0]);
+    }
+
+    /**
+     * @return whether species {@code j} is in the bath at the start (in either compartment). When the target
+     *     metal's ion is not, it is made only at the cathode (Sn2+ from Sn4+ on a tin deposit): it deposits from
+     *     where it is made, not by transport from the bulk, and its share of a "limiting current" computed from
+     *     the bulk flips between 0 and above 1 each time the deposit turns from redissolving to growing. Such a
+     *     share says nothing about mass transfer, so the near-limit event is not watched there.
+     */
+    private boolean inTheBath(int j) {
+        double[] y0 = rates.initialState();
+        StateLayout layout = rates.layout();
+        return y0[j] > 0 || (layout.twoCompartments && y0[layout.anolyte0 + j] > 0);
+    }
+
+    /** @return the share of the limiting current the near-limit event watches for, with its hysteresis */
+    private static double nearLimitThreshold(boolean near) {
+        return near ? NEAR_LIMIT - NEAR_LIMIT_BAND : NEAR_LIMIT;
     }
 
     private double limitRatio(double t, double[] y) {
