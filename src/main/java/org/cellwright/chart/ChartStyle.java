@@ -19,13 +19,16 @@ import org.jfree.chart.ui.RectangleInsets;
 /**
  * Cellwright's own look for charts, light and dark.
  *
- * <p>The line palette keeps the eight hues of the Okabe-Ito set, which stays distinguishable for the common
- * forms of colour-blindness (source: M. Okabe and K. Ito, "Color Universal Design", 2008), but with our own
- * shades: on the light background every hue is darkened until thin lines stand out from white (the yellow
- * becomes an olive, the orange an amber), on the dark background every hue is lightened. Beyond eight
- * series the hues repeat with dashed, then dotted, strokes, so colour is never the only cue. Filled areas
- * (the voltage breakdown) use the same hues blended into the plot background. A pinned reference run uses
- * the hue of its series, faded halfway into the background, with a dashed stroke.
+ * <p>The line palette has eight hues of our own (blue, vermillion, green, pink, olive, sky, plum, graphite),
+ * chosen so that every pair stays apart for readers with normal vision and for the two common red-green
+ * colour-vision deficiencies (deuteranopia, protanopia, simulated after G. M. Machado, M. M. Oliveira and
+ * L. A. F. Fernandes, IEEE TVCG 15(6), 2009): CIEDE2000 difference at least 7 between any two hues in both
+ * looks ({@code ChartPaletteTest}); each keeps a contrast of at least 3:1 against its plot background (WCAG
+ * 2.1, success criterion 1.4.11, non-text contrast). The dark look uses lighter shades of the same hues.
+ * Beyond eight series the hues repeat with dash-dot, then sparser dash-dot, strokes, so colour is never the
+ * only cue. Species and metals get their hue by name ({@link SeriesHues}). Filled areas (the voltage
+ * breakdown) use the same hues blended into the plot background. A pinned reference run uses the hue of its
+ * series, faded halfway into the background, with a dashed stroke; the anolyte of a divided cell a dotted one.
  *
  * <p>{@link #apply(JFreeChart)} applies a {@link StandardChartTheme} built from these colours; it clears the
  * series paints of the renderers, so callers set series paints after it (see {@link RunCharts}).
@@ -34,14 +37,14 @@ public final class ChartStyle {
 
     private static final String FONT = Font.SANS_SERIF;
 
-    /** Okabe-Ito hues darkened for white: blue, vermillion, bluish green, reddish purple, orange, sky blue, yellow, black. */
+    /** The eight hues on white: blue, vermillion, green, pink, olive, sky, plum, graphite. */
     private static final List<Color> LIGHT_LINES = List.of(
-            new Color(0x0B6FAE), new Color(0xCF5A0C), new Color(0x00926A), new Color(0xB24F88),
-            new Color(0xB67A00), new Color(0x2E8DC6), new Color(0x857B00), new Color(0x4F5761));
-    /** The same hues lightened for a dark background. */
+            new Color(0x2A55CC), new Color(0xB8401A), new Color(0x0B9371), new Color(0xC25F99),
+            new Color(0x8F8A1E), new Color(0x0C8DE7), new Color(0x733671), new Color(0x5C6066));
+    /** The same hues lightened for the dark plot background. */
     private static final List<Color> DARK_LINES = List.of(
-            new Color(0x5AAEE6), new Color(0xF08A4B), new Color(0x35C99C), new Color(0xE394C2),
-            new Color(0xF2BC4C), new Color(0x92D2F4), new Color(0xE8DC5A), new Color(0xBAC1CA));
+            new Color(0x8C9BFF), new Color(0xFF8A5C), new Color(0x4FD1A5), new Color(0xFFA3D2),
+            new Color(0xD9D064), new Color(0x7FD4FF), new Color(0xA070C0), new Color(0x8C929A));
 
     private final String name;
     private final boolean dark;
@@ -124,21 +127,32 @@ public final class ChartStyle {
         return lines.get(Math.floorMod(index, lines.size()));
     }
 
+    /** @return how many hues the palette has before they repeat with other strokes */
+    public int hueCount() {
+        return lines.size();
+    }
+
     /**
      * @param index series index, from 0
-     * @return solid for the first eight series, dashed for the next eight, dotted beyond
+     * @return solid for the first eight series, dash-dot for the next eight, a sparser dash-dot beyond (never
+     *     plain dashes or dots: those mark a pinned run and an anolyte)
      */
     public Stroke seriesStroke(int index) {
         int round = index / lines.size();
         if (round == 0) {
             return new BasicStroke(1.8f, BasicStroke.CAP_ROUND, BasicStroke.JOIN_ROUND);
         }
-        float[] dash = round == 1 ? new float[] {7f, 4f} : new float[] {2f, 3f};
+        float[] dash = round == 1 ? new float[] {9f, 3f, 2f, 3f} : new float[] {14f, 3f, 2f, 3f, 2f, 3f};
         return new BasicStroke(1.8f, BasicStroke.CAP_BUTT, BasicStroke.JOIN_ROUND, 10f, dash, 0f);
     }
 
+    /** @return the stroke of the anolyte's series of a divided cell (dotted) */
+    public Stroke anolyteStroke() {
+        return new BasicStroke(2.0f, BasicStroke.CAP_ROUND, BasicStroke.JOIN_ROUND, 10f, new float[] {0.5f, 4f}, 0f);
+    }
+
     /**
-     * @param hue one of the palette's hue indices (0 blue, 1 vermillion, 2 green, 3 purple, 4 amber, 5 sky, 6 olive)
+     * @param hue one of the palette's hue indices (0 blue, 1 vermillion, 2 green, 3 pink, 4 olive, 5 sky, 6 plum, 7 graphite)
      * @return that hue as a fill, blended into the plot background so that lines on top stay readable
      */
     public Color fill(int hue) {

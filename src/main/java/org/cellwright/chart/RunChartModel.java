@@ -34,13 +34,21 @@ public final class RunChartModel {
 
     /** mol/m3 per mol/L. */
     private static final double MOL_PER_M3_PER_MOL_PER_L = 1000.0;
+    /**
+     * Smallest highest concentration (mol/m3, i.e. 1 umol/L) for which an anolyte species gets a line: below it
+     * the line would lie on the axis of a chart in mol/L.
+     */
+    static final double ANOLYTE_SHOWN_MOL_PER_M3 = 1e-3;
     /** Kelvin at 0 degrees C (source: SI Brochure, 9th ed., 2.3.1). */
     private static final double ZERO_CELSIUS_K = 273.15;
 
     private final TimeScale timeScale;
     private final List<String> speciesNames;
     private final List<String> metalSymbols;
+    private final List<String> anolyteSpecies;
+    private final int[] anolyteIndex;
     private final XYSeriesCollection concentrations = new XYSeriesCollection();
+    private final XYSeriesCollection anolyte = new XYSeriesCollection();
     private final YIntervalSeriesCollection voltageParts = new YIntervalSeriesCollection();
     private final XYSeriesCollection cellVoltage = new XYSeriesCollection();
     private final XYSeriesCollection current = new XYSeriesCollection();
@@ -48,7 +56,7 @@ public final class RunChartModel {
     private final XYSeriesCollection deposit = new XYSeriesCollection();
     private final XYSeriesCollection temperature = new XYSeriesCollection();
     private final XYSeriesCollection dendrite = new XYSeriesCollection();
-    private final List<AbstractDataset> all = List.of(concentrations, voltageParts, cellVoltage, current,
+    private final List<AbstractDataset> all = List.of(concentrations, anolyte, voltageParts, cellVoltage, current,
             efficiency, deposit, temperature, dendrite);
     private double lastTimeS = Double.NEGATIVE_INFINITY;
     private int points;
@@ -61,11 +69,35 @@ public final class RunChartModel {
      * @param metalSymbols the depositable metals, in the order of {@link TracePoint#depositKg()}
      */
     public RunChartModel(TimeScale timeScale, List<String> speciesNames, List<String> metalSymbols) {
+        this(timeScale, speciesNames, metalSymbols, List.of());
+    }
+
+    /**
+     * An empty model of a divided cell, ready to be appended to.
+     *
+     * @param timeScale the unit of the time axis
+     * @param speciesNames the tracked species, in the order of {@link InstantState#concentrationsMolPerM3()}
+     * @param metalSymbols the depositable metals, in the order of {@link TracePoint#depositKg()}
+     * @param anolyteSpecies the species of {@code speciesNames} whose anolyte concentration gets a line (empty
+     *     for an undivided cell), see {@link #anolyteSpeciesOf(RunResult)}
+     */
+    public RunChartModel(TimeScale timeScale, List<String> speciesNames, List<String> metalSymbols,
+                         List<String> anolyteSpecies) {
         this.timeScale = timeScale;
         this.speciesNames = List.copyOf(speciesNames);
         this.metalSymbols = List.copyOf(metalSymbols);
+        this.anolyteSpecies = List.copyOf(anolyteSpecies);
+        this.anolyteIndex = new int[this.anolyteSpecies.size()];
         for (String s : this.speciesNames) {
             concentrations.addSeries(new XYSeries(s));
+        }
+        for (int i = 0; i < anolyteIndex.length; i++) {
+            anolyteIndex[i] = this.speciesNames.indexOf(this.anolyteSpecies.get(i));
+            if (anolyteIndex[i] < 0) {
+                throw new IllegalArgumentException("anolyte species " + this.anolyteSpecies.get(i)
+                        + " is not one of " + this.speciesNames);
+            }
+            anolyte.addSeries(new XYSeries(this.anolyteSpecies.get(i) + " (anolyte)"));
         }
         for (String part : VOLTAGE_PARTS) {
             voltageParts.addSeries(new YIntervalSeries(part));
@@ -91,7 +123,34 @@ public final class RunChartModel {
      */
     public static RunChartModel emptyFor(RunResult result) {
         return new RunChartModel(TimeScale.forSpan(plannedSpanOf(result)), result.speciesNames(),
-                result.metalSymbols());
+                result.metalSymbols(), anolyteSpeciesOf(result));
+    }
+
+    /**
+     * @param result a run
+     * @return the species whose anolyte concentration reaches 1 umol/L at some time of the run, in the order of
+     *     {@link RunResult#speciesNames()}; empty for an undivided cell
+     */
+    public static List<String> anolyteSpeciesOf(RunResult result) {
+        List<String> names = result.speciesNames();
+        double[] max = new double[names.size()];
+        boolean divided = false;
+        for (TracePoint p : result.trace()) {
+            double[] a = p.state().anolyteConcentrationsMolPerM3();
+            if (a != null) {
+                divided = true;
+                for (int j = 0; j < a.length && j < max.length; j++) {
+                    max[j] = Math.max(max[j], a[j]);
+                }
+            }
+        }
+        List<String> shown = new ArrayList<>();
+        for (int j = 0; divided && j < max.length; j++) {
+            if (max[j] >= ANOLYTE_SHOWN_MOL_PER_M3) {
+                shown.add(names.get(j));
+            }
+        }
+        return shown;
     }
 
     /**
@@ -108,7 +167,8 @@ public final class RunChartModel {
      * @return a model holding all of its points in that unit
      */
     public static RunChartModel of(RunResult result, TimeScale timeScale) {
-        RunChartModel m = new RunChartModel(timeScale, result.speciesNames(), result.metalSymbols());
+        RunChartModel m = new RunChartModel(timeScale, result.speciesNames(), result.metalSymbols(),
+                anolyteSpeciesOf(result));
         m.append(result.trace());
         return m;
     }
@@ -156,7 +216,7 @@ public final class RunChartModel {
     }
 
     private void clearSeries() {
-        for (XYSeriesCollection c : List.of(concentrations, cellVoltage, current, efficiency, deposit, temperature,
+        for (XYSeriesCollection c : List.of(concentrations, anolyte, cellVoltage, current, efficiency, deposit, temperature,
                 dendrite)) {
             for (int i = 0; i < c.getSeriesCount(); i++) {
                 c.getSeries(i).clear();
@@ -191,6 +251,12 @@ public final class RunChartModel {
         double[] c = s.concentrationsMolPerM3();
         for (int j = 0; j < c.length && j < concentrations.getSeriesCount(); j++) {
             concentrations.getSeries(j).add(x, c[j] / MOL_PER_M3_PER_MOL_PER_L, false);
+        }
+        double[] a = s.anolyteConcentrationsMolPerM3();
+        for (int k = 0; a != null && k < anolyteIndex.length; k++) {
+            if (anolyteIndex[k] < a.length) {
+                anolyte.getSeries(k).add(x, a[anolyteIndex[k]] / MOL_PER_M3_PER_MOL_PER_L, false);
+            }
         }
         double[] parts = voltageParts(s);
         double below = 0;
@@ -240,6 +306,19 @@ public final class RunChartModel {
     /** @return the tracked species, one concentration series each */
     public List<String> speciesNames() {
         return speciesNames;
+    }
+
+    /** @return the species drawn for the anolyte of a divided cell (empty when undivided) */
+    public List<String> anolyteSpecies() {
+        return anolyteSpecies;
+    }
+
+    /**
+     * @return the anolyte's concentration of each of {@link #anolyteSpecies()} (mol/L), one series each, keyed
+     *     "Fe2+ (anolyte)"; no series for an undivided cell
+     */
+    public XYSeriesCollection anolyte() {
+        return anolyte;
     }
 
     /** @return the depositable metals, one deposit series each */

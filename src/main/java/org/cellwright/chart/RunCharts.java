@@ -6,6 +6,7 @@ import java.awt.geom.Line2D;
 import java.awt.geom.Rectangle2D;
 import java.util.ArrayList;
 import java.util.List;
+import java.util.Map;
 
 import org.cellwright.sim.RunEvent;
 import org.cellwright.sim.RunResult;
@@ -35,8 +36,8 @@ import org.jfree.data.xy.XYSeriesCollection;
  */
 public final class RunCharts {
 
-    /** Palette hue of each voltage part: graphite, vermillion, blue, green, olive, purple. */
-    private static final int[] BAND_HUES = {7, 1, 0, 2, 6, 3};
+    /** Palette hue of each voltage part: graphite, vermillion, blue, green, olive, plum. */
+    private static final int[] BAND_HUES = {7, 1, 0, 2, 4, 6};
 
     private final RunChartModel model;
     private double gapMm;
@@ -267,9 +268,9 @@ public final class RunCharts {
             }
         }
         paintNamedSeries(concentrations.getXYPlot(), model.speciesNames(),
-                reference == null ? List.of() : reference.speciesNames());
+                reference == null ? List.of() : reference.speciesNames(), model.anolyteSpecies());
         paintNamedSeries(deposit.getXYPlot(), model.metalSymbols(),
-                reference == null ? List.of() : reference.metalSymbols());
+                reference == null ? List.of() : reference.metalSymbols(), List.of());
         paintVoltage();
         XYPlot cp = current.getXYPlot();
         paintLine(cp, RunPlots.LIVE, 0, style.series(0));
@@ -284,22 +285,75 @@ public final class RunCharts {
         fitDendriteAxis();
     }
 
-    /** Colours series by name, so a species has the same hue in the live and the reference run. */
-    private void paintNamedSeries(XYPlot plot, List<String> names, List<String> refNames) {
+    /**
+     * Colours series by name ({@link SeriesHues}), over the names of the live run, the reference and the anolyte
+     * together, so a species has the same hue in each of them.
+     */
+    private void paintNamedSeries(XYPlot plot, List<String> names, List<String> refNames, List<String> anolyte) {
+        Map<String, Integer> slots = slotsOf(names, refNames);
+        XYItemRenderer live = plot.getRenderer(RunPlots.LIVE);
         for (int i = 0; i < names.size(); i++) {
-            paintLine(plot, RunPlots.LIVE, i, style.series(i));
-            plot.getRenderer(RunPlots.LIVE).setSeriesStroke(i, style.seriesStroke(i));
+            int slot = slots.get(names.get(i));
+            live.setSeriesPaint(i, style.series(slot), false);
+            live.setSeriesStroke(i, style.seriesStroke(slot), false);
         }
-        int extra = names.size();
+        XYItemRenderer r = plot.getRenderer(RunPlots.REFERENCE);
         for (int i = 0; i < refNames.size(); i++) {
-            int hue = names.indexOf(refNames.get(i));
-            if (hue < 0) {
-                hue = extra++;
-            }
-            XYItemRenderer r = plot.getRenderer(RunPlots.REFERENCE);
-            r.setSeriesPaint(i, style.reference(style.series(hue)), false);
+            r.setSeriesPaint(i, style.reference(style.series(slots.get(refNames.get(i)))), false);
             r.setSeriesStroke(i, style.referenceStroke(), false);
         }
+        XYItemRenderer a = plot.getRenderer(RunPlots.ANOLYTE);
+        if (a == null || anolyte.isEmpty()) {
+            if (plot.getFixedLegendItems() != null) {
+                plot.setFixedLegendItems(null);
+            }
+            return;
+        }
+        for (int i = 0; i < anolyte.size(); i++) {
+            a.setSeriesPaint(i, style.series(slots.get(anolyte.get(i))), false);
+            a.setSeriesStroke(i, style.anolyteStroke(), false);
+        }
+        // the species' own entries (the catholyte, solid), then one entry saying that dotted is the anolyte
+        LegendItemCollection legend = new LegendItemCollection();
+        Line2D line = new Line2D.Double(-8, 0, 8, 0);
+        for (int i = 0; i < names.size(); i++) {
+            int slot = slots.get(names.get(i));
+            legend.add(new LegendItem(names.get(i), null, null, null, line, style.seriesStroke(slot),
+                    style.series(slot)));
+        }
+        legend.add(new LegendItem("anolyte (dotted)", null, null, null, line, style.anolyteStroke(), style.text()));
+        for (int i = 0; i < legend.getItemCount(); i++) {
+            legend.get(i).setLabelFont(style.font(10f, false));
+            legend.get(i).setLabelPaint(style.text());
+        }
+        plot.setFixedLegendItems(legend);
+    }
+
+    private Map<String, Integer> slotsOf(List<String> names, List<String> refNames) {
+        List<String> together = new ArrayList<>(names);
+        together.addAll(refNames);
+        return SeriesHues.assign(together);
+    }
+
+    /**
+     * @param species a species of the composition chart
+     * @return the colour of its line (the same for the live run, the reference, the anolyte and the bands)
+     */
+    public Color speciesColour(String species) {
+        List<String> names = new ArrayList<>(model.speciesNames());
+        names.add(species);
+        Integer slot = slotsOf(names, reference == null ? List.of() : reference.speciesNames()).get(species);
+        return style.series(slot);
+    }
+
+    /**
+     * @param metal a metal of the deposit chart
+     * @return the colour of its line
+     */
+    public Color metalColour(String metal) {
+        List<String> names = new ArrayList<>(model.metalSymbols());
+        names.add(metal);
+        return style.series(slotsOf(names, reference == null ? List.of() : reference.metalSymbols()).get(metal));
     }
 
     /** Sets a live series' colour and, when a reference is pinned, the matching reference series. */

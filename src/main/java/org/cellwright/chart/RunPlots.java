@@ -31,6 +31,8 @@ final class RunPlots {
     static final int EFFICIENCY = 2;
     /** Dataset index of the reference run's efficiencies. */
     static final int REFERENCE_EFFICIENCY = 3;
+    /** Dataset index of the anolyte's concentrations of a divided cell (composition chart). */
+    static final int ANOLYTE = 4;
 
     /** Upper end of the efficiency axis (%): 100 % plus room so the line at 100 % is not on the frame. */
     static final double EFFICIENCY_AXIS_MAX = 105;
@@ -46,7 +48,12 @@ final class RunPlots {
     }
 
     static JFreeChart concentrations(RunChartModel m) {
-        return chart("Bath composition", withRun(plot(m, "concentration (mol/L)"), m.concentrations()));
+        XYPlot plot = withRun(plot(m, "concentration (mol/L)"), m.concentrations());
+        if (!m.anolyteSpecies().isEmpty()) {
+            plot.setDataset(ANOLYTE, m.anolyte());
+            plot.setRenderer(ANOLYTE, referenceLines());
+        }
+        return chart("Bath composition", plot);
     }
 
     static JFreeChart voltage(RunChartModel m) {

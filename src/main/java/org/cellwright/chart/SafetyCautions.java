@@ -12,7 +12,8 @@ import org.cellwright.sim.TracePoint;
 
 /**
  * The hazards a scenario and its run raise, for the report: chlorine from an inert anode in a chloride bath,
- * hydrogen from the cathode, acid, lead, and electrical hazards (high current, a short between the
+ * hydrogen from the cathode, acid, a hot bath, nitrogen oxides from an acid nitrate bath, lead, and electrical
+ * hazards (high current, a short between the
  * electrodes). Each names what triggers it in this run and what to do, and all defer to local codes, the
  * safety data sheets of the chemicals and the site's own practice.
  */
@@ -26,6 +27,15 @@ public final class SafetyCautions {
     static final double STP_L_PER_MOL = 22.41396954;
     /** Acid from which the bath is treated as corrosive (mol/L H+): pH below about 1.3 (common practice). */
     static final double ACID_MOL_PER_L = 0.05;
+    /** Bath temperature from which the bath is hot (C): scalds and hot acid splashes (common practice). */
+    static final double HOT_BATH_C = 50;
+    /** Nitrate from which a bath counts as a nitrate bath (mol/L NO3-, about 0.6 g/L) (common practice). */
+    static final double NITRATE_MOL_PER_L = 0.01;
+    /** Kelvin at 0 degrees C (source: SI Brochure, 9th ed., 2.3.1). */
+    static final double ZERO_CELSIUS_K = 273.15;
+    /** The hazards this class names, as the engine's warnings name them (the rest are notes). */
+    static final List<String> HAZARDS = List.of("Chlorine", "Hydrogen", "Acid", "Hot bath", "Nitrate", "Lead",
+            "Electrical");
     /** Current from which leads and a short can overheat on a bench (A) (common practice). */
     static final double HIGH_CURRENT_A = 5;
     /** Gas volume below which a gas is not mentioned (L at 0 C, 1 atm): 0.1 mL. */
@@ -34,7 +44,7 @@ public final class SafetyCautions {
     /**
      * One hazard.
      *
-     * @param hazard its name ("Chlorine", "Hydrogen", "Acid", "Lead", "Electrical")
+     * @param hazard its name ("Chlorine", "Hydrogen", "Acid", "Hot bath", "Nitrate", "Lead", "Electrical")
      * @param trigger what in this scenario or run raises it, with numbers
      * @param advice what to do about it
      */
@@ -76,6 +86,21 @@ public final class SafetyCautions {
             out.add(new Caution("Acid", String.format(Locale.ROOT, "up to %.2g mol/L of free acid in the bath", acid),
                     "The bath burns skin and eyes. Wear goggles, acid-resistant gloves and an apron; have an eye-wash"
                             + " and a neutraliser at hand; add acid to water, never water to acid."));
+        }
+        double hotC = r.trace().stream().mapToDouble(p -> p.state().temperatureK()).max().orElse(0) - ZERO_CELSIUS_K;
+        if (hotC >= HOT_BATH_C) {
+            out.add(new Caution("Hot bath", String.format(Locale.ROOT, "the bath reaches %.0f C", hotC),
+                    "Hot electrolyte scalds, and hot acid splashes burn deeper and give off more fumes than cold."
+                            + " Keep the tank covered, wear heat-resistant gloves and a face shield, and let the"
+                            + " bath cool before reaching into it."));
+        }
+        double nitrate = maxMolPerL(r, "NO3-");
+        if (nitrate >= NITRATE_MOL_PER_L && acid >= ACID_MOL_PER_L) {
+            out.add(new Caution("Nitrate", String.format(Locale.ROOT, "%.2g mol/L of nitrate with up to %.2g mol/L of"
+                    + " free acid in the bath", nitrate, acid),
+                    "Nitric acid and nitrate baths can give off nitrogen oxides (toxic brown fumes), the more so"
+                            + " when hot, concentrated or when metal dissolves in them. Run the cell and any"
+                            + " dissolving of metal under fume extraction."));
         }
         boolean leadElectrode = r.scenario().anode().material().startsWith("lead")
                 || r.scenario().cathode().material().startsWith("lead");
@@ -126,7 +151,7 @@ public final class SafetyCautions {
         List<String> out = new ArrayList<>();
         for (String w : r.summary().warnings()) {
             String head = w.contains(":") ? w.substring(0, w.indexOf(':')) : "";
-            if (!List.of("Chlorine", "Hydrogen", "Acid", "Lead", "Electrical").contains(head)) {
+            if (!HAZARDS.contains(head)) {
                 out.add(w);
             }
         }

@@ -48,7 +48,7 @@ public final class SpreadBands {
         Color[] colours = new Color[species.size()];
         for (int i = 0; i < species.size(); i++) {
             c.addSeries(series(species.get(i), bands, "c:" + species.get(i), m, 1e-3, 0));
-            colours[i] = style.series(i);
+            colours[i] = charts.speciesColour(species.get(i));
         }
         put(charts.concentrations(), BANDS, c, colours);
         // the voltage parts are opaque areas: a band behind them would hide, so this one lies on top, translucent
@@ -64,7 +64,7 @@ public final class SpreadBands {
         Color[] metalColours = new Color[metals.size()];
         for (int i = 0; i < metals.size(); i++) {
             d.addSeries(series(metals.get(i), bands, "deposit:" + metals.get(i), m, 1000, 0));
-            metalColours[i] = style.series(i);
+            metalColours[i] = charts.metalColour(metals.get(i));
         }
         put(charts.deposit(), BANDS, d, metalColours);
         put(charts.temperature(), BANDS, one("temperature", bands, "temperature", m, 1, -273.15), style.series(1));

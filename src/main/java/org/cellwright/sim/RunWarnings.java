@@ -19,6 +19,15 @@ final class RunWarnings {
     static final double STP_L_PER_MOL = 22.41396954;
     /** Solubility product of PbSO4 at 25 C ((mol/L)^2); CRC Handbook, Solubility product constants: 2.53e-8. */
     static final double KSP_PBSO4 = 2.53e-8;
+    /**
+     * Bath temperature from which a run is cautioned as a hot bath (C): scalds and hot acid splashes (common
+     * practice: above about 50 C hot water scalds skin within seconds).
+     */
+    static final double HOT_BATH_C = 50;
+    /** Free acid from which a bath counts as acid (mol/L H+, pH below about 1.3), as the acid caution. */
+    static final double ACID_MOL_PER_L = 0.05;
+    /** Nitrate from which a bath counts as a nitrate bath (mol/L): about 0.6 g/L of NO3- (common practice). */
+    static final double NITRATE_MOL_PER_L = 0.01;
     /** Solubility product of PbCl2 at 25 C ((mol/L)^3); CRC Handbook, Solubility product constants: 1.70e-5. */
     static final double KSP_PBCL2 = 1.70e-5;
 
@@ -56,6 +65,8 @@ final class RunWarnings {
         chlorine();
         hydrogen();
         acid();
+        hotBath();
+        nitrate();
         lead();
         electrical();
         validity();
@@ -157,9 +168,34 @@ final class RunWarnings {
 
     private void acid() {
         double h = maxConcentration("H+");
-        if (h >= 0.05) {
+        if (h >= ACID_MOL_PER_L) {
             out.add(String.format(Locale.ROOT, "Acid: the bath holds %.2g mol/L of acid, which burns skin and eyes."
                     + " Wear eye protection, gloves and an apron; keep water and a neutraliser at hand.", h));
+        }
+    }
+
+    /** A bath at or above {@link #HOT_BATH_C} at any time of the run (common practice). */
+    private void hotBath() {
+        double tMax = trace.stream().mapToDouble(p -> p.state().temperatureK()).max().orElse(298.15) - 273.15;
+        if (tMax >= HOT_BATH_C) {
+            out.add(String.format(Locale.ROOT, "Hot bath: the bath reaches %.0f C. Hot electrolyte scalds, and hot"
+                    + " acid splashes burn deeper and fume more than cold: keep the tank covered, wear heat-resistant"
+                    + " gloves and a face shield, and follow local codes and the safety data sheets.", tMax));
+        }
+    }
+
+    /**
+     * Nitrate with free acid (common practice: nitric acid and acid nitrate baths give off nitrogen oxides, NO
+     * turning to brown NO2 in air, when hot, concentrated or dissolving metal). The engine has no nitrate
+     * reduction, so it cannot give the volume: the caution is raised by the bath alone.
+     */
+    private void nitrate() {
+        double no3 = maxConcentration("NO3-");
+        if (no3 >= NITRATE_MOL_PER_L && maxConcentration("H+") >= ACID_MOL_PER_L) {
+            out.add(String.format(Locale.ROOT, "Nitrate: the bath holds %.2g mol/L of nitrate with acid. Nitric acid"
+                    + " and nitrate baths can give off nitrogen oxides (toxic brown fumes), the more so when hot,"
+                    + " concentrated or when metal dissolves in them: run under fume extraction and follow local"
+                    + " codes and the safety data sheets.", no3));
         }
     }
 

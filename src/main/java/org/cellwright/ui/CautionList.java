@@ -5,8 +5,8 @@ import java.util.List;
 import java.util.Set;
 
 /**
- * A run's warnings sorted for the caution panel: safety cautions (toxic or explosive gas, acid, lead,
- * electrical hazards), which the window shows prominently, apart from notes on the chemistry and on the
+ * A run's warnings sorted for the caution panel: safety cautions (toxic or explosive gas, acid, a hot bath,
+ * nitrogen oxides from a nitrate bath, lead, electrical hazards), which the window shows prominently, apart from notes on the chemistry and on the
  * validity of the data. The engine words each warning as "Topic: text"; the topic decides.
  *
  * @param safety the safety cautions, in the engine's order
@@ -18,8 +18,8 @@ record CautionList(List<Caution> safety, List<Caution> notes) {
      * The topics that make a warning a safety caution (the hazards the engine checks for). A dendrite that
      * shorted the cell is an electrical hazard (the leads carry the whole current), so it is one too.
      */
-    static final Set<String> SAFETY_TOPICS = Set.of("Short circuit", "Chlorine", "Hydrogen", "Acid", "Lead",
-            "Electrical");
+    static final Set<String> SAFETY_TOPICS = Set.of("Short circuit", "Chlorine", "Hydrogen", "Acid", "Hot bath",
+            "Nitrate", "Lead", "Electrical");
 
     /** Longest topic read before a colon (longer text before a colon is a sentence, not a topic). */
     private static final int MAX_TOPIC = 24;

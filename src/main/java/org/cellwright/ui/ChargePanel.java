@@ -192,9 +192,9 @@ final class ChargePanel extends JPanel implements Scrollable {
     }
 
     /**
-     * A reaction's colour, from the chart palette: the target metal blue, hydrogen vermillion, oxygen amber,
-     * chlorine green, other metals sky, either half of a redox shuttle purple, the deposit redissolving
-     * olive, the charge through a dendrite short graphite.
+     * A reaction's colour, from the chart palette: the target metal blue, hydrogen vermillion, oxygen olive,
+     * chlorine green, other metals sky, either half of a redox shuttle pink, the deposit redissolving
+     * plum, the charge through a dendrite short graphite.
      */
     static Color colourOf(ChargeShares.Part p, String target, ChartStyle style) {
         String w = p.words();

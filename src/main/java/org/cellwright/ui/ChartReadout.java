@@ -59,6 +59,13 @@ final class ChartReadout {
                 for (int i = 0; i < c.length && i < species.size(); i++) {
                     sb.append(String.format(Locale.ROOT, "%s: %.4g mol/L<br>", species.get(i), c[i] / 1000));
                 }
+                double[] a = s.anolyteConcentrationsMolPerM3();
+                for (int i = 0; a != null && i < a.length && i < species.size(); i++) {
+                    if (a[i] >= 1e-3) {
+                        sb.append(String.format(Locale.ROOT, "%s in the anolyte: %.4g mol/L<br>", species.get(i),
+                                a[i] / 1000));
+                    }
+                }
                 sb.append(source("bulk concentrations from the species balances"));
             }
             case VOLTAGE -> {

@@ -105,10 +105,12 @@ final class CompositionEditor extends JPanel {
         name.setToolTipText("<html>A dissolved species in any accepted notation: Cu2+, Cu++, Cu^2+, SO4^2-, SO4--,"
                 + " H+, Cl-.<br>Species of the built-in library (docs/library.md).</html>");
         name.putClientProperty("JTextField.placeholderText", "Cu2+");
+        HintStyle.install(name);
         JTextField value = new JTextField(concentration, 9);
         value.setToolTipText("<html>Start concentration: mol/L, M, mmol/L, mol/m3, or g/L, mg/L, ppm, oz/gal"
                 + "<br>(mass units are converted with the species' molar mass from the library).</html>");
         value.putClientProperty("JTextField.placeholderText", "25 g/L");
+        HintStyle.install(value);
         JButton remove = new JButton("\u2212");
         remove.setToolTipText("Remove this species from the bath");
         remove.putClientProperty("JButton.buttonType", "toolBarButton");

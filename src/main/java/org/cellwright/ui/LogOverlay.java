@@ -197,14 +197,12 @@ final class LogOverlay {
     /** The colour of the line the markers are compared with, so a sample sits on its own species' curve. */
     private static Color colourOf(RunCharts c, Markers m, ChartStyle style) {
         return switch (m.target()) {
-            case CONCENTRATIONS -> {
-                int i = c.model().speciesNames().indexOf(m.species());
-                yield style.series(i >= 0 ? i : c.model().speciesNames().size());
-            }
+            case CONCENTRATIONS -> c.speciesColour(m.species());
             // the line is in the text colour over coloured bands: vermillion dots stand out from both
             case VOLTAGE -> style.series(1);
             case CURRENT -> style.series(0);
-            case DEPOSIT -> c.model().metalSymbols().size() == 1 ? style.series(0) : style.text();
+            case DEPOSIT -> c.model().metalSymbols().size() == 1 ? c.metalColour(c.model().metalSymbols().get(0))
+                    : style.text();
             case TEMPERATURE -> style.series(1);
         };
     }

@@ -183,6 +183,32 @@ final class Playback {
         return new Frame(true, trace.subList(0, shownPoints), events.subList(0, shownEvents));
     }
 
+    /**
+     * @return what the charts show now, for the status bar: the whole run, or the time up to the play head
+     *     out of the run's length ("Showing 4 h 0 min of 8 h 0 min (50 %). ...")
+     */
+    String shownText() {
+        return shownText(headS, endS, state);
+    }
+
+    /**
+     * @param headS the play head (s)
+     * @param endS the end of the run (s)
+     * @param state the playback's state
+     * @return the status bar's sentence about what the charts show
+     */
+    static String shownText(double headS, double endS, State state) {
+        if (headS >= endS) {
+            return "Showing the whole run (" + org.cellwright.sim.RunClock.format(endS)
+                    + "). Drag the time slider to look back; Space plays it again.";
+        }
+        String part = String.format(java.util.Locale.ROOT, "Showing %s of %s (%.0f %%).",
+                org.cellwright.sim.RunClock.format(headS), org.cellwright.sim.RunClock.format(endS),
+                endS > 0 ? Math.floor(100 * headS / endS) : 0);
+        return part + (state == State.PLAYING ? " Playing on from here; Space pauses, End shows the whole run."
+                : " Space plays on from here; End shows the whole run.");
+    }
+
     private Frame extendTo(double timeS) {
         int points = countUpTo(timeS);
         int ev = eventsUpTo(timeS);

@@ -202,9 +202,11 @@ final class RunDirector {
         double span = RunChartModel.plannedSpanOf(r);
         TimeScale scale = TimeScale.forSpan(Math.max(span, reference == null ? 0 : reference.run().summary().durationS()));
         double gap = r.scenario().cell().gapM();
+        List<String> anolyte = RunChartModel.anolyteSpeciesOf(r);
         if (model == null || !model.speciesNames().equals(r.speciesNames())
-                || !model.metalSymbols().equals(r.metalSymbols()) || model.timeScale() != scale) {
-            model = new RunChartModel(scale, r.speciesNames(), r.metalSymbols());
+                || !model.metalSymbols().equals(r.metalSymbols()) || !model.anolyteSpecies().equals(anolyte)
+                || model.timeScale() != scale) {
+            model = new RunChartModel(scale, r.speciesNames(), r.metalSymbols(), anolyte);
             charts = RunCharts.live(model, gap, span, ChartStyle.of(dark));
             panels.charts().setCharts(charts);
             if (reference != null) {
@@ -290,7 +292,7 @@ final class RunDirector {
         if (playback != null) {
             ticker.stop();
             apply(playback.jumpToEnd());
-            panels.status().say("Showing the whole run. Drag the time slider to look back; Space plays it again.");
+            panels.status().say(playback.shownText());
             stateChanged.run();
         }
     }
@@ -299,6 +301,7 @@ final class RunDirector {
     void scrubTo(double timeS) {
         if (playback != null) {
             apply(playback.scrubTo(timeS));
+            panels.status().say(playback.shownText());
             lastTick = System.nanoTime();
             stateChanged.run();
         }

@@ -283,6 +283,7 @@ final class ScenarioForm extends JPanel implements Scrollable {
         FieldSpec spec = FormFields.find(key).orElseThrow();
         JTextField f = new JTextField(12);
         f.putClientProperty("JTextField.placeholderText", spec.example());
+        HintStyle.install(f);
         f.setToolTipText(tip(key) + "</html>");
         register(key, f);
         labelled(spec.label(), f, key);

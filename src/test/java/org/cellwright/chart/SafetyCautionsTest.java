@@ -52,4 +52,30 @@ class SafetyCautionsTest {
         // source: the tin run builds Sn4+ above 1 g/L, which the engine notes (RunWarnings.tinChemistry)
         assertTrue(notes.stream().anyMatch(n -> n.startsWith("Tin(IV)")), notes.toString());
     }
+
+    @Test
+    void theReportCautionsAHotBathFrom50C() {
+        // source: scenarios/copper-electrowinning.toml runs at 45 C; 50 C is the threshold (common practice)
+        List<String> warm = hazards(ReportFixture.run("copper-electrowinning.toml", "run.duration=\"1 h\""));
+        assertTrue(!warm.contains("Hot bath"), warm.toString());
+        List<SafetyCautions.Caution> hot = SafetyCautions.of(ReportFixture.run("copper-electrowinning.toml",
+                "run.duration=\"1 h\"", "electrolyte.temperature=\"60 C\""), ReportFixture.LIBRARY);
+        SafetyCautions.Caution c = hot.stream().filter(k -> k.hazard().equals("Hot bath")).findFirst().orElseThrow();
+        assertTrue(c.trigger().startsWith("the bath reaches 6") && c.advice().contains("heat-resistant gloves"),
+                c.toString());
+        assertTrue(SafetyCautions.dataNotes(ReportFixture.run("copper-electrowinning.toml", "run.duration=\"1 h\"",
+                "electrolyte.temperature=\"60 C\"")).stream().noneMatch(n -> n.startsWith("Hot bath")));
+    }
+
+    @Test
+    void theReportCautionsAnAcidNitrateBathAndNoSulfateOrChlorideBath() {
+        // source: scenarios/silver-nitrate-refining.toml: 0.521 mol/L NO3-, 0.15 mol/L H+
+        List<SafetyCautions.Caution> c = SafetyCautions.of(ReportFixture.run("silver-nitrate-refining.toml"),
+                ReportFixture.LIBRARY);
+        SafetyCautions.Caution n = c.stream().filter(k -> k.hazard().equals("Nitrate")).findFirst().orElseThrow();
+        assertTrue(n.trigger().startsWith("0.52 mol/L of nitrate") && n.advice().contains("nitrogen oxides"),
+                n.toString());
+        assertTrue(!hazards(ReportFixture.copper()).contains("Nitrate"));
+        assertTrue(!hazards(ReportFixture.tin()).contains("Nitrate"));
+    }
 }

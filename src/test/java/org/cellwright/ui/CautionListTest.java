@@ -54,6 +54,16 @@ class CautionListTest {
     }
 
     @Test
+    void hotBathAndNitrateAreSafetyCautions() {
+        CautionList l = CautionList.of(List.of("Acid: the bath holds 0.15 mol/L of acid.",
+                "Hot bath: the bath reaches 60 C.", "Nitrate: the bath holds 0.52 mol/L of nitrate with acid.",
+                "Data validity: the bath runs at 60 to 75 C."));
+        assertEquals(List.of("Acid", "Hot bath", "Nitrate"), l.safety().stream().map(CautionList.Caution::topic).toList());
+        assertEquals(1, l.notes().size());
+        assertTrue(CautionStrip.line(l).startsWith("Safety: Acid, hot bath, nitrate."), CautionStrip.line(l));
+    }
+
+    @Test
     void noCautionsSaysSo() {
         assertTrue(CautionStrip.line(CautionList.of(List.of())).startsWith("No safety cautions"));
     }

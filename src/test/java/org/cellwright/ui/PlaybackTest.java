@@ -48,6 +48,25 @@ class PlaybackTest {
     }
 
     @Test
+    void statusSaysWhatIsShownAfterAScrubBack() {
+        Playback p = new Playback(trace, events, 60);
+        p.jumpToEnd();
+        assertTrue(p.shownText().startsWith("Showing the whole run (10 min)"), p.shownText());
+        p.scrubTo(300);
+        // 300 s of the 600 s run: half of it, paused there
+        assertTrue(p.shownText().startsWith("Showing 5 min 0 s of 10 min (50 %)."), p.shownText());
+        assertFalse(p.shownText().startsWith("Showing the whole run"), p.shownText());
+        assertTrue(p.shownText().contains("End shows the whole run"), p.shownText());
+        p.jumpToEnd();
+        assertTrue(p.shownText().startsWith("Showing the whole run"), p.shownText());
+        // the play head past 8 h 0 min of a 9 h 0 min run reads in hours; 88.9 % is written 88 % (never
+        // 100 % before the end)
+        assertEquals("Showing 8 h 0 min of 9 h 0 min (88 %). Space plays on from here; End shows the whole run.",
+                Playback.shownText(8 * 3600, 9 * 3600, Playback.State.PAUSED));
+        assertTrue(Playback.shownText(8 * 3600, 9 * 3600, Playback.State.PLAYING).contains("Playing on"));
+    }
+
+    @Test
     void finishesAtTheEndAndStops() {
         Playback p = new Playback(trace, events, 60);
         p.play();
