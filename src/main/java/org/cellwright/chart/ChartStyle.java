@@ -172,6 +172,18 @@ public final class ChartStyle {
         return new BasicStroke(1.5f, BasicStroke.CAP_BUTT, BasicStroke.JOIN_ROUND, 10f, new float[] {6f, 4f}, 0f);
     }
 
+    /**
+     * @param index series slot, from 0
+     * @return dashed for the first eight slots; beyond them (a hue repeated) long dashes with a dot between
+     */
+    public Stroke referenceStroke(int index) {
+        if (index < lines.size()) {
+            return referenceStroke();
+        }
+        return new BasicStroke(1.5f, BasicStroke.CAP_BUTT, BasicStroke.JOIN_ROUND, 10f,
+                new float[] {10f, 3f, 1.5f, 3f}, 0f);
+    }
+
     /** @return the colour of the gap line and other limits (the vermillion hue) */
     public Color limit() {
         return series(1);

@@ -299,8 +299,9 @@ public final class RunCharts {
         }
         XYItemRenderer r = plot.getRenderer(RunPlots.REFERENCE);
         for (int i = 0; i < refNames.size(); i++) {
-            r.setSeriesPaint(i, style.reference(style.series(slots.get(refNames.get(i)))), false);
-            r.setSeriesStroke(i, style.referenceStroke(), false);
+            int slot = slots.get(refNames.get(i));
+            r.setSeriesPaint(i, style.reference(style.series(slot)), false);
+            r.setSeriesStroke(i, style.referenceStroke(slot), false);
         }
         XYItemRenderer a = plot.getRenderer(RunPlots.ANOLYTE);
         if (a == null || anolyte.isEmpty()) {
@@ -330,9 +331,7 @@ public final class RunCharts {
     }
 
     private Map<String, Integer> slotsOf(List<String> names, List<String> refNames) {
-        List<String> together = new ArrayList<>(names);
-        together.addAll(refNames);
-        return SeriesHues.assign(together);
+        return SeriesHues.assign(names, refNames);
     }
 
     /**
@@ -340,10 +339,9 @@ public final class RunCharts {
      * @return the colour of its line (the same for the live run, the reference, the anolyte and the bands)
      */
     public Color speciesColour(String species) {
-        List<String> names = new ArrayList<>(model.speciesNames());
-        names.add(species);
-        Integer slot = slotsOf(names, reference == null ? List.of() : reference.speciesNames()).get(species);
-        return style.series(slot);
+        List<String> pinned = new ArrayList<>(reference == null ? List.of() : reference.speciesNames());
+        pinned.add(species);
+        return style.series(slotsOf(model.speciesNames(), pinned).get(species));
     }
 
     /**
@@ -351,9 +349,9 @@ public final class RunCharts {
      * @return the colour of its line
      */
     public Color metalColour(String metal) {
-        List<String> names = new ArrayList<>(model.metalSymbols());
-        names.add(metal);
-        return style.series(slotsOf(names, reference == null ? List.of() : reference.metalSymbols()).get(metal));
+        List<String> pinned = new ArrayList<>(reference == null ? List.of() : reference.metalSymbols());
+        pinned.add(metal);
+        return style.series(slotsOf(model.metalSymbols(), pinned).get(metal));
     }
 
     /** Sets a live series' colour and, when a reference is pinned, the matching reference series. */

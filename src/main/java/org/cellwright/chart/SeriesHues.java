@@ -121,6 +121,54 @@ public final class SeriesHues {
         return inGivenOrder;
     }
 
+    /**
+     * Slots for the names of a live run and of a pinned one: the live run's names get exactly the slots
+     * {@link #assign(Collection)} gives them alone (pinning a run never recolours the live curves); names only
+     * the pinned run has take the hues left free (their preferred one if it is), then slots beyond the hues.
+     *
+     * @param live the names of the live run
+     * @param pinned the names of the pinned run
+     * @return each distinct name of both with its slot, the live run's first
+     */
+    public static Map<String, Integer> assign(Collection<String> live, Collection<String> pinned) {
+        Map<String, Integer> slots = assign(live);
+        List<String> more = new ArrayList<>(new LinkedHashSet<>(pinned));
+        more.removeAll(slots.keySet());
+        if (more.isEmpty()) {
+            return slots;
+        }
+        boolean[] taken = new boolean[HUES];
+        int next = HUES;
+        for (int slot : slots.values()) {
+            if (slot < HUES) {
+                taken[slot] = true;
+            }
+            next = Math.max(next, slot + 1);
+        }
+        more.sort(Comparator.comparingInt(SeriesHues::rank).thenComparing(Comparator.naturalOrder()));
+        Map<String, Integer> out = new LinkedHashMap<>(slots);
+        for (String n : more) {
+            Integer want = PREFERRED.get(n);
+            int slot;
+            if (want != null && !taken[want]) {
+                slot = want;
+            } else {
+                slot = 0;
+                while (slot < HUES && taken[slot]) {
+                    slot++;
+                }
+                if (slot == HUES) {
+                    slot = next++;
+                }
+            }
+            if (slot < HUES) {
+                taken[slot] = true;
+            }
+            out.put(n, slot);
+        }
+        return out;
+    }
+
     /** Library names first, in the order of {@link #PREFERRED}; any other name after them. */
     private static int rank(String name) {
         int i = CLAIM_ORDER.indexOf(name);

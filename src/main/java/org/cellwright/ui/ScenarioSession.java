@@ -123,7 +123,9 @@ final class ScenarioSession {
      * @throws ScenarioException when the text is not valid TOML (then nothing changes)
      */
     void openDerived(String text, String displayName) throws ScenarioException {
-        open(text, displayName, null);
+        ScenarioDraft d = ScenarioDraft.parse(text, displayName);
+        FormRounding.derived(d);
+        open(DraftToml.write(d).text(), displayName, null);
         changed = true;
         title.titleChanged(name, true);
     }

@@ -23,7 +23,9 @@ import org.jfree.data.xy.XYDataset;
  * From a click on the sweep chart to the grid point under it, and from the point to a form draft that holds
  * its scenario: the base draft with the point's values typed into their fields (so the form keeps the user's
  * units and supply kind), or, for a key the form has no field for, the point's scenario as written by the
- * scenario writer. Either way the draft reads back to exactly the point's scenario.
+ * scenario writer. Values with more digits than a person would type ("37.7778 mm" of a 10-value range) go
+ * into the form rounded to four significant digits ({@link FormRounding}), so the draft reads back to the
+ * point's scenario up to that rounding (exactly, for values that need no more digits).
  */
 final class SweepPick {
 
@@ -136,30 +138,45 @@ final class SweepPick {
         if (d != null) {
             DraftCheck.Outcome o = DraftCheck.draft(d, lib, name);
             if (o.ok() && o.scenario().equals(target)) {
-                return d;
+                ScenarioDraft rounded = typed(base, p, axes, true);
+                return DraftCheck.draft(rounded, lib, name).ok() ? rounded : d;
             }
         }
         try {
-            return ScenarioDraft.parse(ScenarioWriter.write(target, lib), name);
+            String text = ScenarioWriter.write(target, lib);
+            ScenarioDraft written = ScenarioDraft.parse(text, name);
+            FormRounding.derived(written);
+            return DraftCheck.draft(written, lib, name).ok() ? written : ScenarioDraft.parse(text, name);
         } catch (ScenarioException e) {
             throw new IllegalStateException("the scenario writer wrote text that does not read: " + e.getMessage(), e);
         }
     }
 
-    /** @return the base draft with the point's values in their fields, or null when a key has no field */
+    /** @return the base draft with the point's values in their fields, as the sweep wrote them, or null when a key has no field */
     static ScenarioDraft typed(ScenarioDraft base, SweepPoint p, List<SweepAxis> axes) {
+        return typed(base, p, axes, false);
+    }
+
+    /**
+     * @return the base draft with the point's values in their fields (rounded for the form when {@code round}),
+     *     or null when a key has no field
+     */
+    static ScenarioDraft typed(ScenarioDraft base, SweepPoint p, List<SweepAxis> axes, boolean round) {
         ScenarioDraft d = base.copy();
         for (int a = 0; a < axes.size(); a++) {
-            if (!type(d, axes.get(a).key(), p.point().values().get(a))) {
+            if (!type(d, axes.get(a).key(), p.point().values().get(a), round)) {
                 return null;
             }
         }
         return d;
     }
 
-    private static boolean type(ScenarioDraft d, String key, AxisValue v) {
-        String text = v.text();
+    private static boolean type(ScenarioDraft d, String key, AxisValue v, boolean round) {
         String composition = "electrolyte.composition.";
+        String field = key.startsWith(composition) ? FormFields.COMPOSITION
+                : key.startsWith("supply.") && SupplyKind.ofKey(key.substring("supply.".length())) != null
+                ? FormFields.SUPPLY_VALUE : key;
+        String text = round ? FormRounding.sweepValue(field, v.text()) : v.text();
         if (key.startsWith("supply.")) {
             SupplyKind kind = SupplyKind.ofKey(key.substring("supply.".length()));
             if (kind == null || kind == SupplyKind.SCHEDULE) {

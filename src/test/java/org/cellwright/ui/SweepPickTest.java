@@ -146,4 +146,30 @@ class SweepPickTest {
         // 50 mohm
         assertEquals(0.05, p.scenario().deposit().shortResistanceOhm(), 1e-15);
     }
+
+    @Test
+    void aPointOfAFineRangeGoesIntoTheFormWithFourDigits() throws Exception {
+        ScenarioDraft base = base();
+        // 10 to 60 mm in 10 values: steps of 5.5556 mm; 0.5 to 4 A/dm2 in 10 values: steps of 0.38889 A/dm2
+        List<SweepAxis> axes = List.of(SweepKeys.axis("cell.gap", "10 mm", "60 mm", 10, false),
+                SweepKeys.axis("supply.current_density", "0.5 A/dm2", "4 A/dm2", 10, false));
+        ScenarioVariants v = ScenarioVariants.ofText(TinRun.lib(), DraftCheck.draft(base, TinRun.lib(), "tin.toml")
+                .text(), "tin.toml", List.of(), axes);
+        // the point at index 5 across and 2 up: gap 37.7778 mm as the sweep writes it, 1.27778 A/dm2
+        List<SweepPoint> one = new Sweep(axes, v, ScenarioRunner.engine(TinRun.lib()))
+                .run(2, StudyProgress.NONE, Cancellation.none()).points().stream()
+                .filter(p -> Math.abs(p.point().values().get(0).si() - 0.0377778) < 1e-6
+                        && Math.abs(p.point().values().get(1).si() * 0.01 - 1.27778) < 1e-4).toList();
+        assertEquals(1, one.size());
+        SweepPoint p = one.get(0);
+        assertEquals("37.7778 mm", p.point().values().get(0).text());
+        ScenarioDraft d = SweepPick.draftOf(base, p, axes, TinRun.lib(), "tin.toml");
+        assertEquals("37.78 mm", d.get("cell.gap"));
+        assertEquals("1.278 A/dm2", d.get(FormFields.SUPPLY_VALUE));
+        DraftCheck.Outcome o = DraftCheck.draft(d, TinRun.lib(), "tin.toml");
+        // four significant digits move a value by at most half a unit in the fourth digit: 5e-4 relative
+        assertEquals(p.scenario().cell().gapM(), o.scenario().cell().gapM(), 5e-4 * p.scenario().cell().gapM());
+        assertEquals(p.scenario().supply().currentA(), o.scenario().supply().currentA(),
+                5e-4 * p.scenario().supply().currentA());
+    }
 }
