@@ -107,8 +107,14 @@ class StudyViewsWindowSmokeTest {
             view.setVisible(false);
             return null;
         });
+        // its values go into the form with four significant digits (1.66667 A/dm2 of the sweep as 1.667 A/dm2),
+        // and the run shown is the form's
         await("the middle point's run is shown", 30, () -> edt(() -> window.director().result() != null
-                && window.director().result().scenario().equals(middle.scenario())));
+                && window.director().result().scenario().equals(window.session().scenario())
+                && nearPoint(window.session().scenario(), middle.scenario())));
+        if (!FULL) {
+            assertEquals("1.667 A/dm2", edt(() -> window.form().draft().get(FormFields.SUPPLY_VALUE)));
+        }
         edt(() -> {
             window.actions().toEnd.actionPerformed(null);
             studies.ranges().setSamples(SAMPLES);
@@ -193,5 +199,11 @@ class StudyViewsWindowSmokeTest {
             Thread.sleep(50);
         }
         throw new AssertionError("timed out waiting until " + what + " (" + seconds + " s)");
+    }
+
+    /** @return true when the scenario's gap and current lie within the form's rounding (5e-4) of the point's */
+    private static boolean nearPoint(org.cellwright.cell.Scenario shown, org.cellwright.cell.Scenario point) {
+        return Math.abs(shown.cell().gapM() - point.cell().gapM()) <= 5e-4 * point.cell().gapM()
+                && Math.abs(shown.supply().currentA() - point.supply().currentA()) <= 5e-4 * point.supply().currentA();
     }
 }
