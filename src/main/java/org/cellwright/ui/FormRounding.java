@@ -8,14 +8,16 @@ import java.util.List;
 import java.util.regex.Matcher;
 import java.util.regex.Pattern;
 
-import org.cellwright.io.Dimension;
+import org.cellwright.io.Unit;
+import org.cellwright.io.UnitCatalog;
 import org.cellwright.io.UnitException;
 import org.cellwright.io.UnitParser;
 
 /**
  * Rounds values that the window itself puts into the form (a sweep point's values, a fitted scenario) to
- * what a person would type: {@value #DIGITS} significant digits, and the diffusion layer in micrometres
- * ("37.78 mm", "1.278 A/dm2", "44.91 um" rather than "37.7778 mm", "1.27778 A/dm2", "0.04491 mm"). Only the
+ * what a person would type: {@value #DIGITS} significant digits, the diffusion layer in micrometres and a
+ * contact resistance below 1 ohm in milliohms ("37.78 mm", "1.278 A/dm2", "44.91 um", "11.88 mohm" rather
+ * than "37.7778 mm", "1.27778 A/dm2", "0.04491 mm", "0.01188 ohm"). Only the
  * form's text changes (the scenario then run is the one the form shows); the scenario writer keeps writing
  * files that read back exactly.
  */
@@ -27,8 +29,8 @@ final class FormRounding {
     static final int CLEAN_DIGITS = 6;
     /** Relative distance within which a value counts as equal to a short decimal (binary round-off). */
     private static final double CLEAN = 1e-12;
-    /** Micrometres per metre. */
-    private static final double UM_PER_M = 1e6;
+    /** The contact resistance's key. */
+    private static final String CONTACTS = "cell.contact_resistance";
 
     private static final Pattern NUMBER_UNIT = Pattern.compile("\\s*([-+]?(?:\\d+\\.?\\d*|\\.\\d+)(?:[eE][-+]?\\d+)?)"
             + "\\s*(.*?)\\s*");
@@ -94,10 +96,18 @@ final class FormRounding {
         } catch (NumberFormatException e) {
             return text;
         }
-        if (key.equals(FormFields.DIFFUSION_LAYER) && !unit.equals("um")) {
+        String better = key.equals(FormFields.DIFFUSION_LAYER) ? "um"
+                : key.equals(CONTACTS) && v != 0 ? "mohm" : null;
+        if (better != null && !unit.equals(better)) {
             try {
-                v = UnitParser.parse(text, Dimension.LENGTH).si() * UM_PER_M;
-                unit = "um";
+                Unit u = UnitCatalog.symbol(better);
+                double si = UnitParser.parse(text, u.dimension()).si();
+                if (better.equals("mohm") && Math.abs(si) >= 1) {
+                    better = null;
+                } else {
+                    v = u.fromSi(si);
+                    unit = better;
+                }
             } catch (UnitException e) {
                 return text;
             }

@@ -37,6 +37,14 @@ class FormRoundingTest {
     }
 
     @Test
+    void aSmallContactResistanceIsWrittenInMilliohms() {
+        // the window's fit of the shipped copper log gives 11.88 mohm, written by the scenario writer in ohm
+        assertEquals("11.88 mohm", FormRounding.derivedValue("cell.contact_resistance", "0.01188 ohm"));
+        assertEquals("2.5 ohm", FormRounding.derivedValue("cell.contact_resistance", "2.5 ohm"));
+        assertEquals("0 ohm", FormRounding.derivedValue("cell.contact_resistance", "0 ohm"));
+    }
+
+    @Test
     void derivedValuesKeepTheDigitsTheyHaveAndLoseRoundOff() {
         // the writer's exact text of 340/9 mm: 17 digits, which no one types
         assertEquals("37.78 mm", FormRounding.derivedValue("cell.gap", "37.77777777777778 mm"));
