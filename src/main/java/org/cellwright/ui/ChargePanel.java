@@ -2,12 +2,10 @@ package org.cellwright.ui;
 
 import java.awt.BorderLayout;
 import java.awt.Color;
-import java.awt.Dimension;
 import java.awt.Font;
 import java.awt.GridBagConstraints;
 import java.awt.GridBagLayout;
 import java.awt.Insets;
-import java.awt.Rectangle;
 import java.awt.event.HierarchyEvent;
 import java.util.ArrayList;
 import java.util.List;
@@ -16,7 +14,6 @@ import java.util.Locale;
 import javax.swing.BorderFactory;
 import javax.swing.JLabel;
 import javax.swing.JPanel;
-import javax.swing.Scrollable;
 
 import org.cellwright.chart.ChargeShares;
 import org.cellwright.chart.ChartStyle;
@@ -32,7 +29,7 @@ import org.cellwright.sim.RunResult;
  * and the end. Built from {@link ChargeShares#parts} and {@link FitText#chargeRows}. A run shown while the tab
  * is hidden is drawn when the tab is opened.
  */
-final class ChargePanel extends JPanel implements Scrollable {
+final class ChargePanel extends ColumnPanel {
 
     private static final long serialVersionUID = 1L;
     /** Seconds per hour, for ampere-hours. */
@@ -235,31 +232,6 @@ final class ChargePanel extends JPanel implements Scrollable {
         c.anchor = GridBagConstraints.NORTHWEST;
         c.insets = new Insets(top, 0, 0, 0);
         return c;
-    }
-
-    @Override
-    public Dimension getPreferredScrollableViewportSize() {
-        return getPreferredSize();
-    }
-
-    @Override
-    public int getScrollableUnitIncrement(Rectangle visibleRect, int orientation, int direction) {
-        return 16;
-    }
-
-    @Override
-    public int getScrollableBlockIncrement(Rectangle visibleRect, int orientation, int direction) {
-        return Math.max(16, visibleRect.height - 32);
-    }
-
-    @Override
-    public boolean getScrollableTracksViewportWidth() {
-        return true;
-    }
-
-    @Override
-    public boolean getScrollableTracksViewportHeight() {
-        return false;
     }
 
     /** A wrapper that puts the panel in a scroll pane (for the tab). */

@@ -1,13 +1,11 @@
 package org.cellwright.ui;
 
 import java.awt.Color;
-import java.awt.Dimension;
 import java.awt.FlowLayout;
 import java.awt.Font;
 import java.awt.GridBagConstraints;
 import java.awt.GridBagLayout;
 import java.awt.Insets;
-import java.awt.Rectangle;
 import java.util.ArrayList;
 import java.util.List;
 
@@ -17,7 +15,6 @@ import javax.swing.JButton;
 import javax.swing.JComponent;
 import javax.swing.JLabel;
 import javax.swing.JPanel;
-import javax.swing.Scrollable;
 
 /**
  * The "Log" tab: which measured log is drawn over the charts, how far the run shown lies from it column by
@@ -25,7 +22,7 @@ import javax.swing.Scrollable;
  * their 95 % intervals; with buttons to load a log, fit and remove it. Also the dialog that lists why a log
  * cannot be read.
  */
-final class LogPanel extends JPanel implements Scrollable {
+final class LogPanel extends ColumnPanel {
 
     private static final long serialVersionUID = 1L;
 
@@ -222,30 +219,5 @@ final class LogPanel extends JPanel implements Scrollable {
                 + " Each line gives file:line:column: column name: what is wrong."), java.awt.BorderLayout.NORTH);
         p.add(new javax.swing.JScrollPane(area), java.awt.BorderLayout.CENTER);
         javax.swing.JOptionPane.showMessageDialog(owner, p, "Log problems", javax.swing.JOptionPane.ERROR_MESSAGE);
-    }
-
-    @Override
-    public Dimension getPreferredScrollableViewportSize() {
-        return getPreferredSize();
-    }
-
-    @Override
-    public int getScrollableUnitIncrement(Rectangle visibleRect, int orientation, int direction) {
-        return 16;
-    }
-
-    @Override
-    public int getScrollableBlockIncrement(Rectangle visibleRect, int orientation, int direction) {
-        return Math.max(16, visibleRect.height - 32);
-    }
-
-    @Override
-    public boolean getScrollableTracksViewportWidth() {
-        return true;
-    }
-
-    @Override
-    public boolean getScrollableTracksViewportHeight() {
-        return false;
     }
 }

@@ -1,18 +1,15 @@
 package org.cellwright.ui;
 
-import java.awt.Dimension;
 import java.awt.Font;
 import java.awt.GridBagConstraints;
 import java.awt.GridBagLayout;
 import java.awt.Insets;
-import java.awt.Rectangle;
 import java.util.ArrayList;
 import java.util.List;
 
 import javax.swing.BorderFactory;
 import javax.swing.JLabel;
 import javax.swing.JPanel;
-import javax.swing.Scrollable;
 
 import org.cellwright.sim.RunResult;
 
@@ -21,7 +18,7 @@ import org.cellwright.sim.RunResult;
  * where the charge went at each electrode, in plain words. Its rows are made once and then only get new text,
  * so that a replot after every slider move costs next to nothing here.
  */
-final class SummaryPanel extends JPanel implements Scrollable {
+final class SummaryPanel extends ColumnPanel {
 
     private static final long serialVersionUID = 1L;
     /** Most figure rows (see {@link SummaryFigures#of}). */
@@ -154,30 +151,5 @@ final class SummaryPanel extends JPanel implements Scrollable {
         c.anchor = GridBagConstraints.NORTHWEST;
         c.insets = new Insets(top, 0, 0, col == 0 && width == 1 ? 10 : 0);
         return c;
-    }
-
-    @Override
-    public Dimension getPreferredScrollableViewportSize() {
-        return getPreferredSize();
-    }
-
-    @Override
-    public int getScrollableUnitIncrement(Rectangle visibleRect, int orientation, int direction) {
-        return 16;
-    }
-
-    @Override
-    public int getScrollableBlockIncrement(Rectangle visibleRect, int orientation, int direction) {
-        return Math.max(16, visibleRect.height - 32);
-    }
-
-    @Override
-    public boolean getScrollableTracksViewportWidth() {
-        return true;
-    }
-
-    @Override
-    public boolean getScrollableTracksViewportHeight() {
-        return false;
     }
 }
