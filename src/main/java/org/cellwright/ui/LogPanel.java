@@ -5,7 +5,6 @@ import java.awt.FlowLayout;
 import java.awt.Font;
 import java.awt.GridBagConstraints;
 import java.awt.GridBagLayout;
-import java.awt.Insets;
 import java.util.ArrayList;
 import java.util.List;
 
@@ -107,44 +106,44 @@ final class LogPanel extends ColumnPanel {
             add(new WrapText("No measured log is loaded. Load a CSV log of a real run (time_s, time_min or time_h,"
                     + " and any of current_A, cell_voltage_V, deposit_g, c_<species>_g_per_L): its points are drawn"
                     + " over the charts as open dots, and the scenario can be fitted to it.", "muted.foreground",
-                    0, Font.PLAIN, 330), at(row++, 0, 3, 0));
-            add(buttons(load), at(row++, 0, 3, 8));
+                    0, Font.PLAIN, 330), GridPlace.listCell(row++, 0, 3, 0));
+            add(buttons(load), GridPlace.listCell(row++, 0, 3, 8));
             finish(row);
             return;
         }
-        add(new WrapText(source, null, 0, Font.BOLD, 330), at(row++, 0, 3, 0));
+        add(new WrapText(source, null, 0, Font.BOLD, 330), GridPlace.listCell(row++, 0, 3, 0));
         add(new WrapText(contents + ". Open dots on the charts.", "muted.foreground", 0, Font.PLAIN, 330),
-                at(row++, 0, 3, 2));
+                GridPlace.listCell(row++, 0, 3, 2));
         for (String w : warnings) {
-            add(new WrapText(w, "muted.foreground", -1, Font.ITALIC, 330), at(row++, 0, 3, 2));
+            add(new WrapText(w, "muted.foreground", -1, Font.ITALIC, 330), GridPlace.listCell(row++, 0, 3, 2));
         }
-        add(buttons(fit, load, remove), at(row++, 0, 3, 6));
-        add(bold("Measured minus the run shown"), at(row++, 0, 3, 12));
+        add(buttons(fit, load, remove), GridPlace.listCell(row++, 0, 3, 6));
+        add(bold("Measured minus the run shown"), GridPlace.listCell(row++, 0, 3, 12));
         if (matchNote != null) {
-            add(new WrapText(matchNote, "muted.foreground", 0, Font.PLAIN, 330), at(row++, 0, 3, 2));
+            add(new WrapText(matchNote, "muted.foreground", 0, Font.PLAIN, 330), GridPlace.listCell(row++, 0, 3, 2));
         }
         if (!match.isEmpty()) {
-            add(muted("column"), at(row, 0, 1, 4));
-            add(muted("rms"), at(row, 1, 1, 4));
-            add(muted("typical"), at(row++, 2, 1, 4));
+            add(muted("column"), GridPlace.listCell(row, 0, 1, 4));
+            add(muted("rms"), GridPlace.listCell(row, 1, 1, 4));
+            add(muted("typical"), GridPlace.listCell(row++, 2, 1, 4));
             for (String[] r : match) {
-                add(new JLabel(r[0]), at(row, 0, 1, 2));
-                add(right(r[1]), at(row, 1, 1, 2));
-                add(right(r[2]), at(row++, 2, 1, 2));
+                add(new JLabel(r[0]), GridPlace.listCell(row, 0, 1, 2));
+                add(GridPlace.number(r[1], 10), GridPlace.listCell(row, 1, 1, 2));
+                add(GridPlace.number(r[2], 10), GridPlace.listCell(row++, 2, 1, 2));
             }
         }
         if (fitNote != null) {
-            add(bold("Last fit"), at(row++, 0, 3, 12));
-            add(new WrapText(fitNote, "muted.foreground", 0, Font.PLAIN, 330), at(row++, 0, 3, 2));
+            add(bold("Last fit"), GridPlace.listCell(row++, 0, 3, 12));
+            add(new WrapText(fitNote, "muted.foreground", 0, Font.PLAIN, 330), GridPlace.listCell(row++, 0, 3, 2));
             for (String p : fitted) {
-                add(new WrapText(p, null, 0, Font.PLAIN, 330), at(row++, 0, 3, 3));
+                add(new WrapText(p, null, 0, Font.PLAIN, 330), GridPlace.listCell(row++, 0, 3, 3));
             }
         }
         finish(row);
     }
 
     private void finish(int row) {
-        GridBagConstraints c = at(row, 0, 3, 0);
+        GridBagConstraints c = GridPlace.listCell(row, 0, 3, 0);
         c.weighty = 1;
         add(new JLabel(), c);
         revalidate();
@@ -181,24 +180,6 @@ final class LogPanel extends ColumnPanel {
             }
         };
         return l;
-    }
-
-    private static JLabel right(String text) {
-        JLabel l = new JLabel(text, JLabel.RIGHT);
-        l.setBorder(BorderFactory.createEmptyBorder(0, 10, 0, 0));
-        return l;
-    }
-
-    private static GridBagConstraints at(int row, int col, int width, int top) {
-        GridBagConstraints c = new GridBagConstraints();
-        c.gridy = row;
-        c.gridx = col;
-        c.gridwidth = width;
-        c.weightx = col == 0 ? 1 : 0;
-        c.fill = GridBagConstraints.HORIZONTAL;
-        c.anchor = GridBagConstraints.NORTHWEST;
-        c.insets = new Insets(top, 0, 0, 0);
-        return c;
     }
 
     /**
