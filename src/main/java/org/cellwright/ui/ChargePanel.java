@@ -2,12 +2,9 @@ package org.cellwright.ui;
 
 import java.awt.BorderLayout;
 import java.awt.Color;
-import java.awt.Dimension;
 import java.awt.Font;
 import java.awt.GridBagConstraints;
 import java.awt.GridBagLayout;
-import java.awt.Insets;
-import java.awt.Rectangle;
 import java.awt.event.HierarchyEvent;
 import java.util.ArrayList;
 import java.util.List;
@@ -16,7 +13,6 @@ import java.util.Locale;
 import javax.swing.BorderFactory;
 import javax.swing.JLabel;
 import javax.swing.JPanel;
-import javax.swing.Scrollable;
 
 import org.cellwright.chart.ChargeShares;
 import org.cellwright.chart.ChartStyle;
@@ -32,7 +28,7 @@ import org.cellwright.sim.RunResult;
  * and the end. Built from {@link ChargeShares#parts} and {@link FitText#chargeRows}. A run shown while the tab
  * is hidden is drawn when the tab is opened.
  */
-final class ChargePanel extends JPanel implements Scrollable {
+final class ChargePanel extends ColumnPanel {
 
     private static final long serialVersionUID = 1L;
     /** Seconds per hour, for ampere-hours. */
@@ -84,27 +80,27 @@ final class ChargePanel extends JPanel implements Scrollable {
         if (run == null) {
             add(new WrapText("Run the scenario (F5) or move a slider: how the charge divides between the metal,"
                     + " hydrogen, redox shuttles and the deposit redissolving appears here.", "muted.foreground",
-                    0, Font.PLAIN, 330), at(row, 0, 3, 0));
+                    0, Font.PLAIN, 330), GridPlace.listCell(row, 0, 3, 0));
             finish(row + 1);
             return;
         }
         ChartStyle style = ChartStyle.of(UiTheme.isDark());
         List<ChargeShares.Part> parts = ChargeShares.parts(run, library);
         double q = run.summary().chargeC();
-        add(new WrapText("Whole run: " + label, null, 0, Font.BOLD, 330), at(row++, 0, 3, 0));
+        add(new WrapText("Whole run: " + label, null, 0, Font.BOLD, 330), GridPlace.listCell(row++, 0, 3, 0));
         add(new WrapText(sentence(parts, q), null, 0, Font.PLAIN, 330),
-                at(row++, 0, 3, 6));
+                GridPlace.listCell(row++, 0, 3, 6));
         for (String electrode : List.of("cathode", "anode")) {
             List<ChargeShares.Part> mine = parts.stream().filter(p -> p.electrode().equals(electrode)).toList();
             JLabel head = new JLabel(electrode.substring(0, 1).toUpperCase(Locale.ROOT) + electrode.substring(1)
                     + String.format(Locale.ROOT, "  (%.3g A h)", q / S_PER_H));
             head.setFont(UiTheme.font(0, Font.BOLD));
-            add(head, at(row++, 0, 3, 12));
+            add(head, GridPlace.listCell(row++, 0, 3, 12));
             List<Color> colours = new ArrayList<>();
             for (ChargeShares.Part p : mine) {
                 colours.add(colourOf(p, run.summary().targetMetal(), style));
             }
-            add(new ChargeBar(mine, colours), at(row++, 0, 3, 4));
+            add(new ChargeBar(mine, colours), GridPlace.listCell(row++, 0, 3, 4));
             for (int i = 0; i < mine.size(); i++) {
                 ChargeShares.Part p = mine.get(i);
                 if (Math.abs(p.share()) < 5e-4) {
@@ -115,14 +111,16 @@ final class ChargePanel extends JPanel implements Scrollable {
                         + " (corrosion): the cathode had to pass it again"
                         : p.words().equals(ChargeShares.SHORT) ? "After the short the current passes through the"
                         + " dendrite from cathode to anode and drives no reaction" : null);
-                add(words, at(row, 0, 1, 2));
-                add(right(String.format(Locale.ROOT, "%+.1f %%", 100 * p.share()).replace("+", "")), at(row, 1, 1, 2));
-                add(right(String.format(Locale.ROOT, "%.3g A h", p.chargeC() / S_PER_H)), at(row++, 2, 1, 2));
+                add(words, GridPlace.listCell(row, 0, 1, 2));
+                add(GridPlace.number(String.format(Locale.ROOT, "%+.1f %%", 100 * p.share()).replace("+", ""), 8),
+                        GridPlace.listCell(row, 1, 1, 2));
+                add(GridPlace.number(String.format(Locale.ROOT, "%.3g A h", p.chargeC() / S_PER_H), 8),
+                        GridPlace.listCell(row++, 2, 1, 2));
             }
         }
         JLabel when = new JLabel("Start and end");
         when.setFont(UiTheme.font(0, Font.BOLD));
-        add(when, at(row++, 0, 3, 14));
+        add(when, GridPlace.listCell(row++, 0, 3, 14));
         for (RunReport.Row r : FitText.chargeRows(run)) {
             if (r.label().endsWith("whole run")) {
                 continue;
@@ -135,16 +133,16 @@ final class ChargePanel extends JPanel implements Scrollable {
                     return UiTheme.color("muted.foreground");
                 }
             };
-            add(l, at(row++, 0, 3, 6));
+            add(l, GridPlace.listCell(row++, 0, 3, 6));
             String value = r.value().equals("-") && run.summary().shortCircuitS() != null
                     ? "none: the current passes through the dendrite short" : r.value();
-            add(new WrapText(value, null, 0, Font.PLAIN, 330), at(row++, 0, 3, 1));
+            add(new WrapText(value, null, 0, Font.PLAIN, 330), GridPlace.listCell(row++, 0, 3, 1));
         }
         finish(row);
     }
 
     private void finish(int row) {
-        GridBagConstraints c = at(row, 0, 3, 0);
+        GridBagConstraints c = GridPlace.listCell(row, 0, 3, 0);
         c.weighty = 1;
         add(new JLabel(), c);
         revalidate();
@@ -217,49 +215,6 @@ final class ChargePanel extends JPanel implements Scrollable {
             hue = 3;
         }
         return style.series(hue);
-    }
-
-    private static JLabel right(String text) {
-        JLabel l = new JLabel(text, JLabel.RIGHT);
-        l.setBorder(BorderFactory.createEmptyBorder(0, 8, 0, 0));
-        return l;
-    }
-
-    private static GridBagConstraints at(int row, int col, int width, int top) {
-        GridBagConstraints c = new GridBagConstraints();
-        c.gridy = row;
-        c.gridx = col;
-        c.gridwidth = width;
-        c.weightx = col == 0 ? 1 : 0;
-        c.fill = GridBagConstraints.HORIZONTAL;
-        c.anchor = GridBagConstraints.NORTHWEST;
-        c.insets = new Insets(top, 0, 0, 0);
-        return c;
-    }
-
-    @Override
-    public Dimension getPreferredScrollableViewportSize() {
-        return getPreferredSize();
-    }
-
-    @Override
-    public int getScrollableUnitIncrement(Rectangle visibleRect, int orientation, int direction) {
-        return 16;
-    }
-
-    @Override
-    public int getScrollableBlockIncrement(Rectangle visibleRect, int orientation, int direction) {
-        return Math.max(16, visibleRect.height - 32);
-    }
-
-    @Override
-    public boolean getScrollableTracksViewportWidth() {
-        return true;
-    }
-
-    @Override
-    public boolean getScrollableTracksViewportHeight() {
-        return false;
     }
 
     /** A wrapper that puts the panel in a scroll pane (for the tab). */

@@ -7,7 +7,6 @@ import java.awt.FlowLayout;
 import java.awt.Font;
 import java.awt.GridBagConstraints;
 import java.awt.GridBagLayout;
-import java.awt.Insets;
 import java.awt.Window;
 import java.util.ArrayList;
 import java.util.LinkedHashMap;
@@ -128,37 +127,37 @@ final class FitDialog extends JDialog {
     private JComponent setup(MeasuredLog log) {
         JPanel p = new JPanel(new GridBagLayout());
         int row = 0;
-        p.add(bold("Free values"), at(row++, 0, 2, 0));
+        p.add(bold("Free values"), GridPlace.pairCell(row++, 0, 2, 0));
         p.add(muted("Each starts from the scenario as the window shows it; move the sliders first to start closer."),
-                at(row++, 0, 2, 2));
+                GridPlace.pairCell(row++, 0, 2, 2));
         for (FitController.Candidate c : candidates) {
             JCheckBox b = new JCheckBox("<html>" + c.label() + " <font color='gray'>" + c.key() + "</font></html>",
                     c.preselected());
             boxes.add(b);
-            p.add(b, at(row++, 0, 2, 1));
+            p.add(b, GridPlace.pairCell(row++, 0, 2, 1));
         }
-        p.add(new JLabel("Other keys:"), at(row, 0, 1, 8));
+        p.add(new JLabel("Other keys:"), GridPlace.pairCell(row, 0, 1, 8));
         other.setToolTipText("Any numeric scenario key as a dotted path, comma-separated, e.g."
                 + " electrolyte.temperature, species.Cu2+.diffusion, reaction.H+/H2.alpha_c");
         other.putClientProperty("JTextField.placeholderText", "e.g. species.Cu2+.diffusion, reaction.O2/H2O.alpha_a");
-        p.add(other, at(row++, 1, 1, 8));
-        p.add(bold("Weights"), at(row++, 0, 2, 14));
+        p.add(other, GridPlace.pairCell(row++, 1, 1, 8));
+        p.add(bold("Weights"), GridPlace.pairCell(row++, 0, 2, 14));
         p.add(muted("1 counts a column as much as the others (each is divided by its typical value); 2 trusts it"
-                + " twice as much."), at(row++, 0, 2, 2));
+                + " twice as much."), GridPlace.pairCell(row++, 0, 2, 2));
         for (LogSeries s : log.series()) {
             if (s.count() == 0) {
                 continue;
             }
             JTextField w = new JTextField("1", 5);
             weightFields.put(s.column(), w);
-            p.add(new JLabel(s.column() + "  (" + s.count() + " values)"), at(row, 0, 1, 3));
-            GridBagConstraints c = at(row++, 1, 1, 3);
+            p.add(new JLabel(s.column() + "  (" + s.count() + " values)"), GridPlace.pairCell(row, 0, 1, 3));
+            GridBagConstraints c = GridPlace.pairCell(row++, 1, 1, 3);
             c.fill = GridBagConstraints.NONE;
             p.add(w, c);
         }
         setupError.setForeground(UiTheme.color("error.foreground"));
-        p.add(setupError, at(row++, 0, 2, 10));
-        GridBagConstraints fill = at(row, 0, 2, 0);
+        p.add(setupError, GridPlace.pairCell(row++, 0, 2, 10));
+        GridBagConstraints fill = GridPlace.pairCell(row, 0, 2, 0);
         fill.weighty = 1;
         p.add(new JLabel(), fill);
         JScrollPane s = new JScrollPane(p);
@@ -178,10 +177,10 @@ final class FitDialog extends JDialog {
         top.add(progress, BorderLayout.CENTER);
         p.add(top, BorderLayout.NORTH);
         JPanel tables = new JPanel(new GridBagLayout());
-        tables.add(bold("Fitted values"), at(0, 0, 2, 0));
-        tables.add(scroll(widths(new JTable(params), 190, 110, 240, 110), 4), at(1, 0, 2, 2));
-        tables.add(bold("Columns: how closely the fitted run follows each"), at(2, 0, 2, 10));
-        tables.add(scroll(widths(new JTable(residuals), 170, 230, 150, 100), 5), at(3, 0, 2, 2));
+        tables.add(bold("Fitted values"), GridPlace.pairCell(0, 0, 2, 0));
+        tables.add(scroll(widths(new JTable(params), 190, 110, 240, 110), 4), GridPlace.pairCell(1, 0, 2, 2));
+        tables.add(bold("Columns: how closely the fitted run follows each"), GridPlace.pairCell(2, 0, 2, 10));
+        tables.add(scroll(widths(new JTable(residuals), 170, 230, 150, 100), 5), GridPlace.pairCell(3, 0, 2, 2));
         notes.setEditable(false);
         notes.setOpaque(false);
         notes.setLineWrap(true);
@@ -194,7 +193,7 @@ final class FitDialog extends JDialog {
         // tables above at their own heights
         notesScroll.setPreferredSize(new Dimension(700, 110));
         notesScroll.setMinimumSize(new Dimension(300, 60));
-        GridBagConstraints n = at(4, 0, 2, 10);
+        GridBagConstraints n = GridPlace.pairCell(4, 0, 2, 10);
         n.weighty = 1;
         n.fill = GridBagConstraints.BOTH;
         tables.add(notesScroll, n);
@@ -400,17 +399,5 @@ final class FitDialog extends JDialog {
         JLabel l = new JLabel("<html>" + html(text) + "</html>");
         l.setForeground(UiTheme.color("muted.foreground"));
         return l;
-    }
-
-    private static GridBagConstraints at(int row, int col, int width, int top) {
-        GridBagConstraints c = new GridBagConstraints();
-        c.gridy = row;
-        c.gridx = col;
-        c.gridwidth = width;
-        c.weightx = col == 1 || width == 2 ? 1 : 0;
-        c.fill = GridBagConstraints.HORIZONTAL;
-        c.anchor = GridBagConstraints.NORTHWEST;
-        c.insets = new Insets(top, 0, 0, col == 0 && width == 1 ? 10 : 0);
-        return c;
     }
 }

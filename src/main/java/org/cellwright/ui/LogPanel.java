@@ -1,13 +1,10 @@
 package org.cellwright.ui;
 
 import java.awt.Color;
-import java.awt.Dimension;
 import java.awt.FlowLayout;
 import java.awt.Font;
 import java.awt.GridBagConstraints;
 import java.awt.GridBagLayout;
-import java.awt.Insets;
-import java.awt.Rectangle;
 import java.util.ArrayList;
 import java.util.List;
 
@@ -17,7 +14,6 @@ import javax.swing.JButton;
 import javax.swing.JComponent;
 import javax.swing.JLabel;
 import javax.swing.JPanel;
-import javax.swing.Scrollable;
 
 /**
  * The "Log" tab: which measured log is drawn over the charts, how far the run shown lies from it column by
@@ -25,7 +21,7 @@ import javax.swing.Scrollable;
  * their 95 % intervals; with buttons to load a log, fit and remove it. Also the dialog that lists why a log
  * cannot be read.
  */
-final class LogPanel extends JPanel implements Scrollable {
+final class LogPanel extends ColumnPanel {
 
     private static final long serialVersionUID = 1L;
 
@@ -110,44 +106,44 @@ final class LogPanel extends JPanel implements Scrollable {
             add(new WrapText("No measured log is loaded. Load a CSV log of a real run (time_s, time_min or time_h,"
                     + " and any of current_A, cell_voltage_V, deposit_g, c_<species>_g_per_L): its points are drawn"
                     + " over the charts as open dots, and the scenario can be fitted to it.", "muted.foreground",
-                    0, Font.PLAIN, 330), at(row++, 0, 3, 0));
-            add(buttons(load), at(row++, 0, 3, 8));
+                    0, Font.PLAIN, 330), GridPlace.listCell(row++, 0, 3, 0));
+            add(buttons(load), GridPlace.listCell(row++, 0, 3, 8));
             finish(row);
             return;
         }
-        add(new WrapText(source, null, 0, Font.BOLD, 330), at(row++, 0, 3, 0));
+        add(new WrapText(source, null, 0, Font.BOLD, 330), GridPlace.listCell(row++, 0, 3, 0));
         add(new WrapText(contents + ". Open dots on the charts.", "muted.foreground", 0, Font.PLAIN, 330),
-                at(row++, 0, 3, 2));
+                GridPlace.listCell(row++, 0, 3, 2));
         for (String w : warnings) {
-            add(new WrapText(w, "muted.foreground", -1, Font.ITALIC, 330), at(row++, 0, 3, 2));
+            add(new WrapText(w, "muted.foreground", -1, Font.ITALIC, 330), GridPlace.listCell(row++, 0, 3, 2));
         }
-        add(buttons(fit, load, remove), at(row++, 0, 3, 6));
-        add(bold("Measured minus the run shown"), at(row++, 0, 3, 12));
+        add(buttons(fit, load, remove), GridPlace.listCell(row++, 0, 3, 6));
+        add(bold("Measured minus the run shown"), GridPlace.listCell(row++, 0, 3, 12));
         if (matchNote != null) {
-            add(new WrapText(matchNote, "muted.foreground", 0, Font.PLAIN, 330), at(row++, 0, 3, 2));
+            add(new WrapText(matchNote, "muted.foreground", 0, Font.PLAIN, 330), GridPlace.listCell(row++, 0, 3, 2));
         }
         if (!match.isEmpty()) {
-            add(muted("column"), at(row, 0, 1, 4));
-            add(muted("rms"), at(row, 1, 1, 4));
-            add(muted("typical"), at(row++, 2, 1, 4));
+            add(muted("column"), GridPlace.listCell(row, 0, 1, 4));
+            add(muted("rms"), GridPlace.listCell(row, 1, 1, 4));
+            add(muted("typical"), GridPlace.listCell(row++, 2, 1, 4));
             for (String[] r : match) {
-                add(new JLabel(r[0]), at(row, 0, 1, 2));
-                add(right(r[1]), at(row, 1, 1, 2));
-                add(right(r[2]), at(row++, 2, 1, 2));
+                add(new JLabel(r[0]), GridPlace.listCell(row, 0, 1, 2));
+                add(GridPlace.number(r[1], 10), GridPlace.listCell(row, 1, 1, 2));
+                add(GridPlace.number(r[2], 10), GridPlace.listCell(row++, 2, 1, 2));
             }
         }
         if (fitNote != null) {
-            add(bold("Last fit"), at(row++, 0, 3, 12));
-            add(new WrapText(fitNote, "muted.foreground", 0, Font.PLAIN, 330), at(row++, 0, 3, 2));
+            add(bold("Last fit"), GridPlace.listCell(row++, 0, 3, 12));
+            add(new WrapText(fitNote, "muted.foreground", 0, Font.PLAIN, 330), GridPlace.listCell(row++, 0, 3, 2));
             for (String p : fitted) {
-                add(new WrapText(p, null, 0, Font.PLAIN, 330), at(row++, 0, 3, 3));
+                add(new WrapText(p, null, 0, Font.PLAIN, 330), GridPlace.listCell(row++, 0, 3, 3));
             }
         }
         finish(row);
     }
 
     private void finish(int row) {
-        GridBagConstraints c = at(row, 0, 3, 0);
+        GridBagConstraints c = GridPlace.listCell(row, 0, 3, 0);
         c.weighty = 1;
         add(new JLabel(), c);
         revalidate();
@@ -186,24 +182,6 @@ final class LogPanel extends JPanel implements Scrollable {
         return l;
     }
 
-    private static JLabel right(String text) {
-        JLabel l = new JLabel(text, JLabel.RIGHT);
-        l.setBorder(BorderFactory.createEmptyBorder(0, 10, 0, 0));
-        return l;
-    }
-
-    private static GridBagConstraints at(int row, int col, int width, int top) {
-        GridBagConstraints c = new GridBagConstraints();
-        c.gridy = row;
-        c.gridx = col;
-        c.gridwidth = width;
-        c.weightx = col == 0 ? 1 : 0;
-        c.fill = GridBagConstraints.HORIZONTAL;
-        c.anchor = GridBagConstraints.NORTHWEST;
-        c.insets = new Insets(top, 0, 0, 0);
-        return c;
-    }
-
     /**
      * Lists why a log cannot be read, one problem a line ({@code file:line:column: column: what is wrong}).
      *
@@ -222,30 +200,5 @@ final class LogPanel extends JPanel implements Scrollable {
                 + " Each line gives file:line:column: column name: what is wrong."), java.awt.BorderLayout.NORTH);
         p.add(new javax.swing.JScrollPane(area), java.awt.BorderLayout.CENTER);
         javax.swing.JOptionPane.showMessageDialog(owner, p, "Log problems", javax.swing.JOptionPane.ERROR_MESSAGE);
-    }
-
-    @Override
-    public Dimension getPreferredScrollableViewportSize() {
-        return getPreferredSize();
-    }
-
-    @Override
-    public int getScrollableUnitIncrement(Rectangle visibleRect, int orientation, int direction) {
-        return 16;
-    }
-
-    @Override
-    public int getScrollableBlockIncrement(Rectangle visibleRect, int orientation, int direction) {
-        return Math.max(16, visibleRect.height - 32);
-    }
-
-    @Override
-    public boolean getScrollableTracksViewportWidth() {
-        return true;
-    }
-
-    @Override
-    public boolean getScrollableTracksViewportHeight() {
-        return false;
     }
 }

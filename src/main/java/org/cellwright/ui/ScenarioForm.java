@@ -2,7 +2,6 @@ package org.cellwright.ui;
 
 import java.awt.Dimension;
 import java.awt.GridBagLayout;
-import java.awt.Rectangle;
 import java.util.HashMap;
 import java.util.List;
 import java.util.Map;
@@ -12,11 +11,9 @@ import javax.swing.BorderFactory;
 import javax.swing.JComboBox;
 import javax.swing.JComponent;
 import javax.swing.JLabel;
-import javax.swing.JPanel;
 import javax.swing.JScrollPane;
 import javax.swing.JTextArea;
 import javax.swing.JTextField;
-import javax.swing.Scrollable;
 import javax.swing.event.DocumentEvent;
 import javax.swing.event.DocumentListener;
 import javax.swing.text.JTextComponent;
@@ -30,7 +27,7 @@ import org.cellwright.chem.ElectrodeMaterial;
  * checked as it is typed, with what is wrong written under the field. Edits go straight into the
  * {@link ScenarioDraft}; the listener hears of each so that the whole scenario can be checked and run.
  */
-final class ScenarioForm extends JPanel implements Scrollable {
+final class ScenarioForm extends ColumnPanel {
 
     private static final long serialVersionUID = 1L;
     private static final String OUTLINE = "JComponent.outline";
@@ -340,30 +337,5 @@ final class ScenarioForm extends JPanel implements Scrollable {
             messages.put(key, m);
             grid.message(m);
         }
-    }
-
-    @Override
-    public Dimension getPreferredScrollableViewportSize() {
-        return getPreferredSize();
-    }
-
-    @Override
-    public int getScrollableUnitIncrement(Rectangle visibleRect, int orientation, int direction) {
-        return 16;
-    }
-
-    @Override
-    public int getScrollableBlockIncrement(Rectangle visibleRect, int orientation, int direction) {
-        return visibleRect.height - 32;
-    }
-
-    @Override
-    public boolean getScrollableTracksViewportWidth() {
-        return true;
-    }
-
-    @Override
-    public boolean getScrollableTracksViewportHeight() {
-        return false;
     }
 }

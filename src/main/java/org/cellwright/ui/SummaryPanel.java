@@ -1,18 +1,14 @@
 package org.cellwright.ui;
 
-import java.awt.Dimension;
 import java.awt.Font;
 import java.awt.GridBagConstraints;
 import java.awt.GridBagLayout;
-import java.awt.Insets;
-import java.awt.Rectangle;
 import java.util.ArrayList;
 import java.util.List;
 
 import javax.swing.BorderFactory;
 import javax.swing.JLabel;
 import javax.swing.JPanel;
-import javax.swing.Scrollable;
 
 import org.cellwright.sim.RunResult;
 
@@ -21,7 +17,7 @@ import org.cellwright.sim.RunResult;
  * where the charge went at each electrode, in plain words. Its rows are made once and then only get new text,
  * so that a replot after every slider move costs next to nothing here.
  */
-final class SummaryPanel extends JPanel implements Scrollable {
+final class SummaryPanel extends ColumnPanel {
 
     private static final long serialVersionUID = 1L;
     /** Most figure rows (see {@link SummaryFigures#of}). */
@@ -43,8 +39,8 @@ final class SummaryPanel extends JPanel implements Scrollable {
         super(new GridBagLayout());
         setBorder(BorderFactory.createEmptyBorder(8, 10, 8, 10));
         int row = 0;
-        add(empty, at(row++, 0, 2, 0));
-        add(head, at(row++, 0, 2, 0));
+        add(empty, GridPlace.pairCell(row++, 0, 2, 0));
+        add(head, GridPlace.pairCell(row++, 0, 2, 0));
         for (int i = 0; i < FIGURE_ROWS; i++) {
             JLabel l = new JLabel() {
                 private static final long serialVersionUID = 1L;
@@ -57,21 +53,21 @@ final class SummaryPanel extends JPanel implements Scrollable {
             WrapText v = new WrapText("", null, 0, Font.PLAIN, 200);
             labels.add(l);
             values.add(v);
-            add(l, at(row, 0, 1, 4));
-            add(v, at(row++, 1, 1, 4));
+            add(l, GridPlace.pairCell(row, 0, 1, 4));
+            add(v, GridPlace.pairCell(row++, 1, 1, 4));
         }
         where.setFont(UiTheme.font(0, Font.BOLD));
         where.setToolTipText("Each electrode reaction's share of the charge passed, largest first.");
-        add(where, at(row++, 0, 2, 12));
+        add(where, GridPlace.pairCell(row++, 0, 2, 12));
         for (int i = 0; i < SHARE_ROWS; i++) {
             WrapText s = new WrapText("", null, 0, Font.PLAIN, 330);
             shares.add(s);
-            add(s, at(row++, 0, 2, 3));
+            add(s, GridPlace.pairCell(row++, 0, 2, 3));
         }
         sections.setOpaque(false);
         sections.setLayout(new javax.swing.BoxLayout(sections, javax.swing.BoxLayout.Y_AXIS));
-        add(sections, at(row++, 0, 2, 12));
-        GridBagConstraints c = at(row, 0, 2, 0);
+        add(sections, GridPlace.pairCell(row++, 0, 2, 12));
+        GridBagConstraints c = GridPlace.pairCell(row, 0, 2, 0);
         c.weighty = 1;
         add(new JLabel(), c);
         clear();
@@ -142,42 +138,5 @@ final class SummaryPanel extends JPanel implements Scrollable {
             }
         }
         return out;
-    }
-
-    private static GridBagConstraints at(int row, int col, int width, int top) {
-        GridBagConstraints c = new GridBagConstraints();
-        c.gridy = row;
-        c.gridx = col;
-        c.gridwidth = width;
-        c.weightx = col == 1 || width == 2 ? 1 : 0;
-        c.fill = GridBagConstraints.HORIZONTAL;
-        c.anchor = GridBagConstraints.NORTHWEST;
-        c.insets = new Insets(top, 0, 0, col == 0 && width == 1 ? 10 : 0);
-        return c;
-    }
-
-    @Override
-    public Dimension getPreferredScrollableViewportSize() {
-        return getPreferredSize();
-    }
-
-    @Override
-    public int getScrollableUnitIncrement(Rectangle visibleRect, int orientation, int direction) {
-        return 16;
-    }
-
-    @Override
-    public int getScrollableBlockIncrement(Rectangle visibleRect, int orientation, int direction) {
-        return Math.max(16, visibleRect.height - 32);
-    }
-
-    @Override
-    public boolean getScrollableTracksViewportWidth() {
-        return true;
-    }
-
-    @Override
-    public boolean getScrollableTracksViewportHeight() {
-        return false;
     }
 }

@@ -1,5 +1,6 @@
 package org.cellwright.ui;
 
+import static org.cellwright.ui.OnEdt.edt;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertNotNull;
@@ -8,12 +9,9 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.util.List;
 import java.util.Locale;
-import java.util.concurrent.Callable;
-import java.util.concurrent.atomic.AtomicReference;
 
 import javax.swing.AbstractAction;
 import javax.swing.JFrame;
-import javax.swing.SwingUtilities;
 
 import org.cellwright.cell.RunSettings;
 import org.cellwright.cell.Scenario;
@@ -181,34 +179,7 @@ class BandsOverlayTest {
         return null;
     }
 
-    private static <T> T edt(Callable<T> c) throws Exception {
-        AtomicReference<T> out = new AtomicReference<>();
-        AtomicReference<Exception> err = new AtomicReference<>();
-        SwingUtilities.invokeAndWait(() -> {
-            try {
-                out.set(c.call());
-            } catch (Exception e) {
-                err.set(e);
-            }
-        });
-        if (err.get() != null) {
-            throw err.get();
-        }
-        return out.get();
-    }
-
-    private interface Check {
-        boolean ok() throws Exception;
-    }
-
-    private static void await(String what, Check check) throws Exception {
-        long end = System.nanoTime() + 60_000_000_000L;
-        while (System.nanoTime() < end) {
-            if (check.ok()) {
-                return;
-            }
-            Thread.sleep(20);
-        }
-        throw new AssertionError("timed out waiting until " + what);
+    private static void await(String what, OnEdt.Check check) throws Exception {
+        OnEdt.await(what, 60, check);
     }
 }

@@ -1,5 +1,7 @@
 package org.cellwright.ui;
 
+import static org.cellwright.ui.OnEdt.await;
+import static org.cellwright.ui.OnEdt.edt;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
@@ -15,7 +17,6 @@ import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.List;
 import java.util.Locale;
-import java.util.concurrent.Callable;
 import java.util.concurrent.atomic.AtomicReference;
 
 import javax.imageio.ImageIO;
@@ -196,36 +197,5 @@ class CellwrightWindowSmokeTest {
     private static void write(BufferedImage img, Path file) throws IOException {
         assertTrue(img.getWidth() > 800 && img.getHeight() > 500, "window size " + img.getWidth() + "x" + img.getHeight());
         ImageIO.write(img, "png", file.toFile());
-    }
-
-    private static <T> T edt(Callable<T> c) throws Exception {
-        AtomicReference<T> out = new AtomicReference<>();
-        AtomicReference<Exception> err = new AtomicReference<>();
-        SwingUtilities.invokeAndWait(() -> {
-            try {
-                out.set(c.call());
-            } catch (Exception e) {
-                err.set(e);
-            }
-        });
-        if (err.get() != null) {
-            throw err.get();
-        }
-        return out.get();
-    }
-
-    private interface Check {
-        boolean ok() throws Exception;
-    }
-
-    private static void await(String what, int seconds, Check check) throws Exception {
-        long end = System.nanoTime() + seconds * 1_000_000_000L;
-        while (System.nanoTime() < end) {
-            if (check.ok()) {
-                return;
-            }
-            Thread.sleep(50);
-        }
-        throw new AssertionError("timed out waiting until " + what + " (" + seconds + " s)");
     }
 }

@@ -1,5 +1,8 @@
 package org.cellwright.ui;
 
+import static org.cellwright.ui.OnEdt.await;
+import static org.cellwright.ui.OnEdt.edt;
+
 import java.awt.Component;
 import java.awt.Container;
 import java.awt.Rectangle;
@@ -9,7 +12,6 @@ import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Optional;
-import java.util.concurrent.Callable;
 import java.util.concurrent.atomic.AtomicReference;
 
 import javax.imageio.ImageIO;
@@ -225,36 +227,5 @@ public final class GuideScreenshots {
         Path p = out.resolve(name);
         ImageIO.write(img, "png", p.toFile());
         written.add(p);
-    }
-
-    private static <T> T edt(Callable<T> c) throws Exception {
-        AtomicReference<T> result = new AtomicReference<>();
-        AtomicReference<Exception> err = new AtomicReference<>();
-        SwingUtilities.invokeAndWait(() -> {
-            try {
-                result.set(c.call());
-            } catch (Exception e) {
-                err.set(e);
-            }
-        });
-        if (err.get() != null) {
-            throw err.get();
-        }
-        return result.get();
-    }
-
-    private interface Check {
-        boolean ok() throws Exception;
-    }
-
-    private static void await(String what, int seconds, Check check) throws Exception {
-        long end = System.nanoTime() + seconds * 1_000_000_000L;
-        while (System.nanoTime() < end) {
-            if (check.ok()) {
-                return;
-            }
-            Thread.sleep(50);
-        }
-        throw new IllegalStateException("timed out waiting until " + what + " (" + seconds + " s)");
     }
 }

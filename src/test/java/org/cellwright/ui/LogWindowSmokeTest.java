@@ -1,5 +1,7 @@
 package org.cellwright.ui;
 
+import static org.cellwright.ui.OnEdt.await;
+import static org.cellwright.ui.OnEdt.edt;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertNotNull;
 import static org.junit.jupiter.api.Assertions.assertSame;
@@ -11,7 +13,6 @@ import java.awt.GraphicsEnvironment;
 import java.awt.image.BufferedImage;
 import java.nio.file.Files;
 import java.nio.file.Path;
-import java.util.concurrent.Callable;
 import java.util.concurrent.atomic.AtomicReference;
 
 import javax.imageio.ImageIO;
@@ -204,36 +205,5 @@ class LogWindowSmokeTest {
         Files.createDirectories(Path.of("target"));
         assertTrue(img.get().getWidth() > 200 && img.get().getHeight() > 100, name + " is too small");
         ImageIO.write(img.get(), "png", Path.of("target", name).toFile());
-    }
-
-    private static <T> T edt(Callable<T> c) throws Exception {
-        AtomicReference<T> out = new AtomicReference<>();
-        AtomicReference<Exception> err = new AtomicReference<>();
-        SwingUtilities.invokeAndWait(() -> {
-            try {
-                out.set(c.call());
-            } catch (Exception e) {
-                err.set(e);
-            }
-        });
-        if (err.get() != null) {
-            throw err.get();
-        }
-        return out.get();
-    }
-
-    private interface Check {
-        boolean ok() throws Exception;
-    }
-
-    private static void await(String what, int seconds, Check check) throws Exception {
-        long end = System.nanoTime() + seconds * 1_000_000_000L;
-        while (System.nanoTime() < end) {
-            if (check.ok()) {
-                return;
-            }
-            Thread.sleep(50);
-        }
-        throw new AssertionError("timed out waiting until " + what + " (" + seconds + " s)");
     }
 }

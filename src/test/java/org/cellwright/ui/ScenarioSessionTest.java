@@ -1,5 +1,6 @@
 package org.cellwright.ui;
 
+import static org.cellwright.ui.OnEdt.edt;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertNotNull;
@@ -9,11 +10,9 @@ import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.List;
-import java.util.concurrent.Callable;
 import java.util.concurrent.atomic.AtomicReference;
 
 import javax.swing.AbstractAction;
-import javax.swing.SwingUtilities;
 
 import org.cellwright.io.ScenarioReader;
 import org.junit.jupiter.api.Test;
@@ -134,34 +133,7 @@ class ScenarioSessionTest {
         return org.cellwright.io.UnitParser.parse(text, org.cellwright.io.Dimension.LENGTH).si();
     }
 
-    private static <T> T edt(Callable<T> c) throws Exception {
-        AtomicReference<T> out = new AtomicReference<>();
-        AtomicReference<Exception> err = new AtomicReference<>();
-        SwingUtilities.invokeAndWait(() -> {
-            try {
-                out.set(c.call());
-            } catch (Exception e) {
-                err.set(e);
-            }
-        });
-        if (err.get() != null) {
-            throw err.get();
-        }
-        return out.get();
-    }
-
-    private interface Check {
-        boolean ok() throws Exception;
-    }
-
-    private static void await(Check c) throws Exception {
-        long end = System.nanoTime() + 30_000_000_000L;
-        while (System.nanoTime() < end) {
-            if (edt(c::ok)) {
-                return;
-            }
-            Thread.sleep(20);
-        }
-        throw new AssertionError("timed out");
+    private static void await(OnEdt.Check c) throws Exception {
+        OnEdt.await("the session settles", 30, () -> edt(c::ok));
     }
 }

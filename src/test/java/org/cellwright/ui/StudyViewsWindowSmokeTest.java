@@ -1,5 +1,6 @@
 package org.cellwright.ui;
 
+import static org.cellwright.ui.OnEdt.edt;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertNotNull;
@@ -13,7 +14,6 @@ import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.Locale;
-import java.util.concurrent.Callable;
 import java.util.concurrent.atomic.AtomicReference;
 
 import javax.imageio.ImageIO;
@@ -168,37 +168,8 @@ class StudyViewsWindowSmokeTest {
         ImageIO.write(img.get(), "png", Path.of("target", name).toFile());
     }
 
-    private static <T> T edt(Callable<T> c) throws Exception {
-        AtomicReference<T> out = new AtomicReference<>();
-        AtomicReference<Exception> err = new AtomicReference<>();
-        SwingUtilities.invokeAndWait(() -> {
-            try {
-                out.set(c.call());
-            } catch (Exception e) {
-                err.set(e);
-            }
-        });
-        if (err.get() != null) {
-            throw err.get();
-        }
-        return out.get();
-    }
-
-    private interface Check {
-        boolean ok() throws Exception;
-    }
-
-    private static void await(String what, int seconds, Check check) throws Exception {
-        long t0 = System.nanoTime();
-        long end = t0 + seconds * 1_000_000_000L;
-        while (System.nanoTime() < end) {
-            if (check.ok()) {
-                System.out.printf(Locale.ROOT, "TIMING %s: %.2f s%n", what, (System.nanoTime() - t0) / 1e9);
-                return;
-            }
-            Thread.sleep(50);
-        }
-        throw new AssertionError("timed out waiting until " + what + " (" + seconds + " s)");
+    private static void await(String what, int seconds, OnEdt.Check check) throws Exception {
+        System.out.printf(Locale.ROOT, "TIMING %s: %.2f s%n", what, OnEdt.await(what, seconds, check));
     }
 
     /** @return true when the scenario's gap and current lie within the form's rounding (5e-4) of the point's */
