@@ -68,9 +68,13 @@ public final class SummaryText {
         out.add(String.format(Locale.ROOT, "  temperature      %.1f C at start, %.1f C at end, max %.1f C",
                 s.temperatureStartK() - 273.15, s.temperatureEndK() - 273.15, s.temperatureMaxK() - 273.15));
         StringBuilder gas = new StringBuilder();
-        s.gasMol().forEach((g, mol) -> gas.append(gas.length() == 0 ? "" : ", ")
-                .append(String.format(Locale.ROOT, "%s %.3g L", g, mol * STP_L_PER_MOL)));
-        out.add("  gas (0 C, 1 atm) " + gas);
+        s.gasMol().forEach((g, mol) -> {
+            if (mol * STP_L_PER_MOL >= 1e-6) { // below a microlitre is no gas anyone will see
+                gas.append(gas.length() == 0 ? "" : ", ").append(String.format(Locale.ROOT, "%s %.3g L", g,
+                        mol * STP_L_PER_MOL));
+            }
+        });
+        out.add("  gas (0 C, 1 atm) " + (gas.length() == 0 ? "none" : gas));
         StringBuilder conc = new StringBuilder();
         s.finalConcentrationMolPerM3().forEach((sp, c) -> {
             if (c > 1e-6) {
