@@ -339,6 +339,12 @@ final class ElectrodeKinetics {
                 break;
             }
             double next = slope > 0 ? e - fe / slope : Double.NaN;
+            if (Math.abs(next - e) <= 2 * Math.ulp(e)) {
+                // the Newton step is below the spacing of doubles at e: no representable potential comes
+                // closer, and the residual left is the current's round-off (a target of zero has a
+                // tolerance of 1e-16 A/m2, finer than di/dE times one ulp of E)
+                break;
+            }
             boolean bracketed = lo > Double.NEGATIVE_INFINITY && hi < Double.POSITIVE_INFINITY;
             if (bracketed) {
                 if (!(next > lo && next < hi)) {
