@@ -339,13 +339,13 @@ final class ElectrodeKinetics {
                 break;
             }
             double next = slope > 0 ? e - fe / slope : Double.NaN;
-            if (Math.abs(next - e) <= 2 * Math.ulp(e)) {
-                // the Newton step is below the spacing of doubles at e: no representable potential comes
-                // closer, and the residual left is the current's round-off (a target of zero has a
-                // tolerance of 1e-16 A/m2, finer than di/dE times one ulp of E)
+            boolean bracketed = lo > Double.NEGATIVE_INFINITY && hi < Double.POSITIVE_INFINITY;
+            if (!bracketed && next == e) {
+                // the Newton step is below half the spacing of doubles at e and no bracket is known to bisect:
+                // the iteration would stand still (a target of zero has a tolerance of 1e-16 A/m2, finer than
+                // di/dE times one ulp of E); e is the answer it would give after its last iteration
                 break;
             }
-            boolean bracketed = lo > Double.NEGATIVE_INFINITY && hi < Double.POSITIVE_INFINITY;
             if (bracketed) {
                 if (!(next > lo && next < hi)) {
                     next = 0.5 * (lo + hi);
