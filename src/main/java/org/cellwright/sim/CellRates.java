@@ -228,9 +228,9 @@ public final class CellRates implements FirstOrderDifferentialEquations {
         for (int m = 0; m < layout.metals; m++) {
             yDot[layout.corroded0 + m] = Math.max(0, -yDot[layout.deposit0 + m]);
         }
-        bulk(op.c, rate, catholyteM3, yDot);
+        bulk(op.c, op.signedC, rate, catholyteM3, yDot);
         if (layout.twoCompartments) {
-            bulk(op.cA, rateA, anolyteM3, yDot);
+            bulk(op.cA, op.signedCA, rateA, anolyteM3, yDot);
             // once shorted, the current passes through the dendrite, not through the solution
             op.compartments.fluxes(op.c, op.cA, op.shorted ? 0 : op.currentA, op.diffusionFactor, flux);
             for (int j = 0; j < flux.length; j++) {
@@ -251,8 +251,13 @@ public final class CellRates implements FirstOrderDifferentialEquations {
         yDot[layout.shortCharge] = op.shorted ? op.currentA : 0;
     }
 
-    /** Degassing of dissolved chlorine and the homogeneous reactions of one compartment. */
-    private void bulk(double[] c, double[] into, double volume, double[] yDot) {
+    /**
+     * Degassing of dissolved chlorine and the homogeneous reactions of one compartment.
+     *
+     * @param c      the compartment's concentrations clipped at zero (mol/m3)
+     * @param signed the same as the state holds them, possibly a little below zero (mol/m3)
+     */
+    private void bulk(double[] c, double[] signed, double[] into, double volume, double[] yDot) {
         if (net.dissolvedChlorineIndex >= 0) {
             int j = net.dissolvedChlorineIndex;
             double degas = CHLORINE_DEGASSING_PER_S * c[j];
@@ -260,16 +265,61 @@ public final class CellRates implements FirstOrderDifferentialEquations {
             yDot[layout.gas0 + 2] += degas * volume;
         }
         for (ReactionNetwork.PreparedHomogeneous h : net.homogeneous) {
-            double r = h.reaction().rateConstant();
-            for (int i = 0; i < h.index().length; i++) {
-                if (h.order()[i] > 0) {
-                    r *= Math.pow(c[h.index()[i]], h.order()[i]);
-                }
-            }
+            double r = massAction(h.reaction().rateConstant(), h.index(), h.nu(), h.order(), signed);
             for (int i = 0; i < h.index().length; i++) {
                 into[h.index()[i]] += h.nu()[i] * r;
             }
         }
+    }
+
+    /**
+     * Mass-action rate {@code k prod c_j^order_j} (mol/(m3 s)), extended continuously below zero. The integrator
+     * may leave a depleted reactant a little below zero (within its absolute tolerance; states are never
+     * clipped, so that conservation stays exact). Were the reactant clipped at zero here, the rate would be
+     * flat in it there: the Jacobian would lose the reaction's restoring mode (about -k c_other, 1e5 1/s and
+     * more for dissolved chlorine against Sn2+), the step would become explicit in that component and the
+     * steps collapse to a hundredth of a second. So a first-order reactant x below zero enters with its sign
+     * (the linear continuation of the rate, whose slope is continuous through zero): the reaction runs
+     * backwards and brings x back to zero, as a linear sink would. The backward run takes its products as
+     * reactants, so it is weighted by {@code p / (p + |x|)} for each product p: close to 1 while the products
+     * are plentiful (slope still continuous at x = 0), and vanishing with a product, which it can therefore
+     * never drive below zero. A reactant of another order below zero, or two reactants below zero at once,
+     * give no rate (the slope of c^p at zero is zero for p &gt; 1).
+     *
+     * @param k     rate constant (SI)
+     * @param index state index of each participant
+     * @param nu    signed coefficient of each (products positive)
+     * @param order order of each (0 for products)
+     * @param c     concentrations as the state holds them (mol/m3)
+     * @return the rate (mol/(m3 s)), negative when a first-order reactant is below zero
+     */
+    static double massAction(double k, int[] index, double[] nu, double[] order, double[] c) {
+        double r = k;
+        double deficit = 0;
+        for (int i = 0; i < index.length; i++) {
+            double p = order[i];
+            if (p <= 0) {
+                continue;
+            }
+            double x = c[index[i]];
+            if (x >= 0) {
+                r *= p == 1 ? x : Math.pow(x, p);
+            } else if (p == 1 && deficit == 0) {
+                deficit = -x;
+                r *= x;
+            } else {
+                return 0;
+            }
+        }
+        if (deficit > 0) {
+            for (int i = 0; i < index.length; i++) {
+                if (nu[i] > 0 && order[i] <= 0) {
+                    double product = Math.max(c[index[i]], 0);
+                    r *= product / (product + deficit);
+                }
+            }
+        }
+        return r;
     }
 
     /** Rates of one compartment into the state, with the net acidity and the proton turnover. */

@@ -340,6 +340,12 @@ final class ElectrodeKinetics {
             }
             double next = slope > 0 ? e - fe / slope : Double.NaN;
             boolean bracketed = lo > Double.NEGATIVE_INFINITY && hi < Double.POSITIVE_INFINITY;
+            if (!bracketed && next == e) {
+                // the Newton step is below half the spacing of doubles at e and no bracket is known to bisect:
+                // the iteration would stand still (a target of zero has a tolerance of 1e-16 A/m2, finer than
+                // di/dE times one ulp of E); e is the answer it would give after its last iteration
+                break;
+            }
             if (bracketed) {
                 if (!(next > lo && next < hi)) {
                     next = 0.5 * (lo + hi);

@@ -72,6 +72,14 @@ final class OperatingPoint {
     final double shortOhm;
     final double[] c;
     final double[] cA;
+    /**
+     * The concentrations as the state holds them (mol/m3), not clipped at zero: the integrator may leave a
+     * depleted species a little below zero, within its absolute tolerance, and the homogeneous rates extend
+     * through zero on these (see {@link CellRates}). H+ and OH- as recovered from the net acidity.
+     */
+    final double[] signedC;
+    /** The anolyte's, as {@link #signedC} (the same array when the cell is undivided). */
+    final double[] signedCA;
     /** Concentrations that set activities (mol/m3): as {@link #c}, with H+ free of bisulfate. */
     final double[] free;
     /** The anolyte's, as {@link #free} (the same array when the cell is undivided). */
@@ -123,6 +131,8 @@ final class OperatingPoint {
         int n = net.species().size();
         c = new double[n];
         cA = compartments.twoCompartments() ? new double[n] : c;
+        signedC = new double[n];
+        signedCA = compartments.twoCompartments() ? new double[n] : signedC;
         free = new double[n];
         freeA = compartments.twoCompartments() ? new double[n] : free;
         km = new double[n];
@@ -148,9 +158,9 @@ final class OperatingPoint {
     /** Unpacks the state into concentrations, temperature and mass-transfer coefficients. */
     void unpack(double t, double[] y) {
         shorted = t >= shortAtS;
-        unpackBlock(y, 0, c);
+        unpackBlock(y, 0, c, signedC);
         if (compartments.twoCompartments()) {
-            unpackBlock(y, layout.anolyte0, cA);
+            unpackBlock(y, layout.anolyte0, cA, signedCA);
         }
         tempK = Math.min(Math.max(y[layout.temperature], PHYSICS_MIN_K), PHYSICS_MAX_K);
         double tEff = Math.max(t, FIRST_LAYER_S);
@@ -213,8 +223,9 @@ final class OperatingPoint {
     }
 
     /** Concentrations of one compartment's block, with H+ and OH- recovered from the net acidity. */
-    private void unpackBlock(double[] y, int offset, double[] out) {
+    private void unpackBlock(double[] y, int offset, double[] out, double[] signed) {
         for (int j = 0; j < out.length; j++) {
+            signed[j] = y[offset + j];
             out[j] = Math.max(y[offset + j], 0);
         }
         if (net.waterEquilibrium()) {
@@ -223,6 +234,8 @@ final class OperatingPoint {
                     : 2 * WATER_ION_PRODUCT / (-h + Math.sqrt(h * h + 4 * WATER_ION_PRODUCT));
             out[net.hIndex] = hPlus;
             out[net.ohIndex] = WATER_ION_PRODUCT / hPlus;
+            signed[net.hIndex] = hPlus;
+            signed[net.ohIndex] = out[net.ohIndex];
         }
     }
 

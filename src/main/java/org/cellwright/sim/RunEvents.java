@@ -228,30 +228,64 @@ final class RunEvents {
         }
     }
 
+    /**
+     * Hysteresis of the supply-limit events: once the cell has needed more than the voltage limit (or drawn more
+     * than the current limit), the log says it is back below only when the need has fallen this far under the
+     * limit: 1 mV, or 1e-4 of the current limit (model choice, below what a bench supply's meters resolve).
+     * Without it a need that rises to the limit and turns back (a touch: the bath warms, or the anolyte
+     * replenishes the catholyte) leaves the switching function on its old side right after the event, within
+     * the integrator's error, and Commons Math 3.6.1 then searches the rest of the step for the crossing in
+     * steps of the convergence time (1e-6 s), millions of solves of the operating point.
+     */
+    static final double VOLTAGE_LIMIT_BAND_V = 1e-3;
+    static final double CURRENT_LIMIT_BAND = 1e-4;
+
     private void addSupplyLimit() {
         var supply = sc.supply();
         if (supply.mode() == ControlMode.CURRENT && Double.isFinite(supply.voltageLimitV())) {
-            all.add(new RunEventDetector((t, y) -> {
+            double limit = supply.voltageLimitV();
+            boolean[] over = new boolean[1];
+            RunEventDetector[] detector = new RunEventDetector[1];
+            detector[0] = new RunEventDetector((t, y) -> {
                 op.unpack(t, y);
-                return supply.voltageLimitV() - op.voltageNeededAt(t);
-            }, false, (t, y, inc) -> inc
-                    ? new RunEvent(t, RunEvent.Kind.VOLTAGE_LIMIT_LEFT, String.format(Locale.ROOT,
-                    "At %s the cell again needs less than %.2f V: the supply is back to its set current.",
-                    RunClock.format(t), supply.voltageLimitV()))
-                    : new RunEvent(t, RunEvent.Kind.VOLTAGE_LIMIT_ENTERED, String.format(Locale.ROOT,
-                    "At %s the cell would need more than the supply's %.2f V limit: the supply now holds"
-                            + " %.2f V and the current falls below its set value.", RunClock.format(t),
-                    supply.voltageLimitV(), supply.voltageLimitV())), log));
+                return limit - (over[0] ? VOLTAGE_LIMIT_BAND_V : 0) - op.voltageNeededAt(t);
+            }, (t0, y0) -> {
+                op.unpack(t0, y0);
+                over[0] = op.voltageNeededAt(t0) > limit;
+            }, false, (t, y, inc) -> {
+                over[0] = !inc;
+                detector[0].forgetValues();
+                return inc
+                        ? new RunEvent(t, RunEvent.Kind.VOLTAGE_LIMIT_LEFT, String.format(Locale.ROOT,
+                        "At %s the cell again needs less than %.2f V: the supply is back to its set current.",
+                        RunClock.format(t), limit))
+                        : new RunEvent(t, RunEvent.Kind.VOLTAGE_LIMIT_ENTERED, String.format(Locale.ROOT,
+                        "At %s the cell would need more than the supply's %.2f V limit: the supply now holds"
+                                + " %.2f V and the current falls below its set value.", RunClock.format(t),
+                        limit, limit));
+            }, log);
+            all.add(detector[0]);
         }
         if (supply.mode() == ControlMode.VOLTAGE && Double.isFinite(supply.currentLimitA())) {
-            all.add(new RunEventDetector((t, y) -> {
+            double limit = supply.currentLimitA();
+            boolean[] over = new boolean[1];
+            RunEventDetector[] detector = new RunEventDetector[1];
+            detector[0] = new RunEventDetector((t, y) -> {
                 op.unpack(t, y);
-                return supply.currentLimitA() - op.currentNeededAt(t);
-            }, false, (t, y, inc) -> new RunEvent(t, inc ? RunEvent.Kind.CURRENT_LIMIT_LEFT
-                    : RunEvent.Kind.CURRENT_LIMIT_ENTERED, String.format(Locale.ROOT, inc
-                    ? "At %s the cell draws less than the %.2f A limit again: the supply holds its set voltage."
-                    : "At %s the cell would draw more than the %.2f A limit: the supply now holds that current.",
-                    RunClock.format(t), supply.currentLimitA())), log));
+                return limit * (1 - (over[0] ? CURRENT_LIMIT_BAND : 0)) - op.currentNeededAt(t);
+            }, (t0, y0) -> {
+                op.unpack(t0, y0);
+                over[0] = op.currentNeededAt(t0) > limit;
+            }, false, (t, y, inc) -> {
+                over[0] = !inc;
+                detector[0].forgetValues();
+                return new RunEvent(t, inc ? RunEvent.Kind.CURRENT_LIMIT_LEFT
+                        : RunEvent.Kind.CURRENT_LIMIT_ENTERED, String.format(Locale.ROOT, inc
+                        ? "At %s the cell draws less than the %.2f A limit again: the supply holds its set voltage."
+                        : "At %s the cell would draw more than the %.2f A limit: the supply now holds that current.",
+                        RunClock.format(t), limit));
+            }, log);
+            all.add(detector[0]);
         }
     }
 

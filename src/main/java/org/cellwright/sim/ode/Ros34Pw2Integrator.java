@@ -269,7 +269,7 @@ public class Ros34Pw2Integrator extends AbstractIntegrator {
                     reduction = NON_FINITE_REDUCTION;
                 } else {
                     error = control.errorNorm(step.error, y, step.solution, primary);
-                    double excursion = negativeExcursion(step.solution, flags);
+                    double excursion = negativeExcursion(y, step.solution, flags);
                     if (!(error <= 1.0)) {
                         failure = String.format(Locale.ROOT, "local error test failed, scaled error %.3g", error);
                         reduction = control.factor(error, false);
@@ -320,6 +320,12 @@ public class Ros34Pw2Integrator extends AbstractIntegrator {
             // here so that only a reset during this step forces a fresh Jacobian
             resetOccurred = false;
             stepStart = acceptStep(interpolator, y, yDot, t);
+            if (!isLastStep && stepStart == t) {
+                // an event located at the end time itself (within its convergence) ends the step there without
+                // ending the integration: nothing is left to integrate, and a step of length zero would make
+                // the iteration matrix infinite
+                isLastStep = true;
+            }
 
             if (!isLastStep) {
                 if (resetOccurred) {
@@ -355,12 +361,18 @@ public class Ros34Pw2Integrator extends AbstractIntegrator {
         return lu.factor();
     }
 
-    /** Largest -y_i / absTol_i over flagged components (0 if none is negative). */
-    private double negativeExcursion(double[] y, boolean[] flags) {
+    /**
+     * Largest excursion {@code (min(y0_i, 0) - y1_i) / absTol_i} over flagged components (0 if none went down
+     * below zero): how far the step took a component below zero, or below where it already was if it started
+     * below zero. A step may start a little below zero (the dense output at an event time can undershoot where
+     * the step ends did not); counting from zero there would refuse every step, however short, that merely
+     * keeps the component where it is, down to the minimum step.
+     */
+    private double negativeExcursion(double[] y0, double[] y1, boolean[] flags) {
         double worst = 0.0;
         for (int i = 0; i < flags.length; i++) {
-            if (flags[i] && y[i] < 0.0) {
-                worst = Math.max(worst, -y[i] / control.absTol(i));
+            if (flags[i] && y1[i] < 0.0) {
+                worst = Math.max(worst, (Math.min(y0[i], 0.0) - y1[i]) / control.absTol(i));
             }
         }
         return worst;
