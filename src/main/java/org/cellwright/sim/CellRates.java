@@ -358,8 +358,8 @@ public final class CellRates implements FirstOrderDifferentialEquations {
         for (int k = 0; k < an.length; k++) {
             an[k] = op.anodeI[k] * op.anodeAreaM2;
         }
-        double eqC = chargeWeighted(cath, -1, op.cathode.eEq, op.cathodeE);
-        double eqA = chargeWeighted(an, 1, op.anode.eEq, op.anodeE);
+        double eqC = chargeWeighted(cath, -1, shown(op.cathode, nc), op.cathodeE);
+        double eqA = chargeWeighted(an, 1, shown(op.anode, an.length), op.anodeE);
         double eff = 0;
         double limitRatio = 0;
         if (net.targetSlot >= 0 && op.currentA > 0) {
@@ -390,6 +390,14 @@ public final class CellRates implements FirstOrderDifferentialEquations {
      * @param idle   what to return when nothing runs in the electrode's direction (the electrode potential)
      * @return weighted equilibrium potential (V vs SHE)
      */
+    private static double[] shown(ElectrodeKinetics kin, int count) {
+        double[] e = new double[count];
+        for (int k = 0; k < count; k++) {
+            e[k] = kin.shownEquilibrium(k);
+        }
+        return e;
+    }
+
     private static double chargeWeighted(double[] amps, int sign, double[] eEq, double idle) {
         double sum = 0;
         double weighted = 0;

@@ -39,6 +39,14 @@ final class ElectrodeKinetics {
     static final double MIN_ACTIVITY = 1e-30;
     /** Smallest concentration used in limiting currents (mol/m3), so that no ratio is 0/0. */
     static final double MIN_CONCENTRATION = 1e-27;
+    /**
+     * Smallest activity of a dissolved species in the equilibrium potentials the voltage breakdown shows
+     * (relative to 1 mol/L): 1e-6, the activity Pourbaix takes as the edge of a species' existence (Pourbaix,
+     * Atlas of Electrochemical Equilibria in Aqueous Solutions, 1966, ch. 1). Below it a product absent from
+     * the bulk (Sn4+ in a fresh tin bath) would put the Nernst potential volts away and the split would say
+     * little; the kinetics keep {@link #MIN_ACTIVITY}.
+     */
+    static final double SHOWN_MIN_ACTIVITY = 1e-6;
 
     private final List<ReactionSlot> slots;
     private final int count;
@@ -77,6 +85,8 @@ final class ElectrodeKinetics {
      */
     private final boolean[] depositBranch;
     private double f;
+    private double[] lastFree;
+    private double lastTempK;
     private double hint;
     private final double[] scratch = new double[1];
 
@@ -143,6 +153,8 @@ final class ElectrodeKinetics {
      */
     void prepare(double[] c, double[] free, double[] km, double tempK, double coverage, double[] metalShare) {
         f = PhysicalConstants.FARADAY / (PhysicalConstants.GAS_CONSTANT * tempK);
+        lastFree = free;
+        lastTempK = tempK;
         for (int k = 0; k < count; k++) {
             ReactionSlot s = slots.get(k);
             double lnAo = 0;
@@ -402,5 +414,24 @@ final class ElectrodeKinetics {
      */
     double lastSurfaceRatioOx(int k) {
         return limitOx[k] < 0 ? 1 : 1 / (1 + share[limitOx[k]]);
+    }
+
+    /**
+     * Equilibrium potential of reaction {@code k} as the voltage breakdown shows it: the Nernst potential at
+     * the free activities of the last {@link #prepare}, each at least {@link #SHOWN_MIN_ACTIVITY}.
+     *
+     * @param k reaction slot
+     * @return equilibrium potential (V vs SHE)
+     */
+    double shownEquilibrium(int k) {
+        ReactionSlot s = slots.get(k);
+        double ln = 0;
+        for (int j = 0; j < s.oxIndex().length; j++) {
+            ln += s.oxNu()[j] * Math.log(Math.max(lastFree[s.oxIndex()[j]] * 1e-3, SHOWN_MIN_ACTIVITY));
+        }
+        for (int j = 0; j < s.redIndex().length; j++) {
+            ln -= s.redNu()[j] * Math.log(Math.max(lastFree[s.redIndex()[j]] * 1e-3, SHOWN_MIN_ACTIVITY));
+        }
+        return s.reaction().e0At(lastTempK) + ln / (s.n() * f);
     }
 }
