@@ -239,7 +239,7 @@ public final class CellSimulation {
                     dfdy[i][j] = (f1[i] - f0[i]) / h;
                 }
             }
-            invariants.project(dfdy);
+            invariants.project(dfdy, inner.operatingPoint().shorted);
         }
 
         @Override

@@ -19,10 +19,19 @@ import org.cellwright.chem.Species;
  * Integration, 2nd ed. 2006, section IV.1: linear invariants and Runge-Kutta/Rosenbrock methods). H and O are
  * left out: water, the solvent, is not part of the state, and their balance is not linear in it when water's
  * ion product ties H+ and OH-.
+ *
+ * <p>The charge through a short stays exactly zero until a dendrite bridges the gap: its rate is 0 and its
+ * Jacobian row is 0, so a Rosenbrock step leaves it at 0. Projecting onto the electrode balances, which
+ * contain it, would write round-off of the total-charge row into that row (8.6e-14 C over a run that passes
+ * almost no charge). Before the short it is therefore left out of the balances, which then still hold (its
+ * rate is zero), and the projection never touches its row; after the short the full balances apply.
  */
 final class ConservedQuantities {
 
-    private final double[][] basis;
+    /** Balances for the open cell: the short-circuit charge left out. */
+    private final double[][] openBasis;
+    /** Balances for the shorted cell. */
+    private final double[][] shortedBasis;
 
     ConservedQuantities(ReactionNetwork net, StateLayout layout, double catholyteM3, double anolyteM3) {
         List<double[]> vectors = new ArrayList<>();
@@ -64,9 +73,17 @@ final class ConservedQuantities {
         for (int k = 0; k < layout.slots; k++) {
             (k < nc ? cathode : anode)[layout.reactionCharge0 + k] = 1;
         }
-        vectors.add(cathode);
-        vectors.add(anode);
-        basis = orthonormal(vectors);
+        List<double[]> shorted = new ArrayList<>(vectors);
+        shorted.add(cathode);
+        shorted.add(anode);
+        shortedBasis = orthonormal(shorted);
+        double[] openCathode = cathode.clone();
+        double[] openAnode = anode.clone();
+        openCathode[layout.shortCharge] = 0;
+        openAnode[layout.shortCharge] = 0;
+        vectors.add(openCathode);
+        vectors.add(openAnode);
+        openBasis = orthonormal(vectors);
     }
 
     /** Modified Gram-Schmidt; vectors that depend on earlier ones are dropped. */
@@ -100,10 +117,15 @@ final class ConservedQuantities {
         return s;
     }
 
-    /** Removes from every column of {@code jacobian} its components along the invariants. */
-    void project(double[][] jacobian) {
+    /**
+     * Removes from every column of {@code jacobian} its components along the invariants.
+     *
+     * @param jacobian the matrix, changed in place
+     * @param shorted true once a dendrite has shorted the cell (at the time the Jacobian was formed)
+     */
+    void project(double[][] jacobian, boolean shorted) {
         int n = jacobian.length;
-        for (double[] q : basis) {
+        for (double[] q : shorted ? shortedBasis : openBasis) {
             for (int j = 0; j < n; j++) {
                 double p = 0;
                 for (int i = 0; i < n; i++) {

@@ -152,12 +152,14 @@ class ConservationTest {
                 anode += y[layout.reactionCharge0 + k];
             }
         }
-        double scale = Math.max(Math.abs(y[layout.charge]), 1e-12);
+        double chargeTolerance = Math.max(1e-9 * Math.abs(y[layout.charge]),
+                chargeResolution(sc, net, y, r.summary().durationS()));
         if (r.summary().shortCircuitS() == null) {
-            assertEquals(0, y[layout.shortCharge], 1e-9 * scale, "no short, no charge through one");
+            // its rate and its Jacobian row are zero until a short, and the invariant projection leaves it out
+            assertEquals(0, y[layout.shortCharge], 0, "no short, no charge through one");
         }
-        assertEquals(-charge, cathode, 1e-9 * scale, "cathode partial charges");
-        assertEquals(charge, anode, 1e-9 * scale, "anode partial charges");
+        assertEquals(-charge, cathode, chargeTolerance, "cathode partial charges");
+        assertEquals(charge, anode, chargeTolerance, "anode partial charges");
         // each compartment stays electroneutral: what the electrodes take, migration brings back. Not one of the
         // projected invariants, so the finite-difference Jacobian leaves it at the 1e-8 level: tolerance 1e-7
         InstantState first = r.trace().get(0).state();
@@ -174,30 +176,61 @@ class ConservationTest {
         double anolyte = sc.cell().compartments().twoCompartments()
                 ? sc.cell().compartments().anolyteVolumeM3(total) : 0;
         double[] volumes = {total - anolyte, anolyte};
-        Map<String, Double> before = inventory(net, layout, initial(sc, net, layout), volumes, null);
-        Map<String, Double> after = inventory(net, layout, y, volumes, before);
-        if (Boolean.getBoolean("debugFe")) {
-            CellRates rr = new CellRates(sc, net);
-            double[] y0 = rr.initialState();
-            double[] f = new double[y0.length];
-            rr.computeDerivatives(100, y0, f);
-            double fe = 0;
-            for (int j = 0; j < net.species().size(); j++) {
-                fe += f[j] * sc.electrolyte().volumeM3() * net.species().get(j).elements().getOrDefault("Fe", 0);
-            }
-            for (int m = 0; m < layout.metals; m++) {
-                if (net.depositMetals().get(m).symbol().equals("Fe")) fe += f[layout.deposit0 + m];
-            }
-            System.out.println("dFe/dt = " + fe + " species " + net.species() + " cath " + net.cathodeSlots.stream().map(q -> q.reaction().name()).toList() + " an " + net.anodeSlots.stream().map(q -> q.reaction().name()).toList() + " anodeMetal " + net.anodeMetal + " metals " + net.depositMetals());
-        }
+        Map<String, Double> sizes = new HashMap<>();
+        Map<String, Double> before = inventory(net, layout, initial(sc, net, layout), volumes, null, sizes);
+        Map<String, Double> after = inventory(net, layout, y, volumes, before, sizes);
         for (String element : before.keySet()) {
             double b = before.get(element);
             double a = after.getOrDefault(element, 0.0);
             // scale: the element's inventory, or the moles of charge moved when the element came in from outside
             double moved = Math.abs(y[layout.charge]) / 96485.33212;
-            assertEquals(b, a, 1e-9 * Math.max(Math.abs(b), moved), "element " + element);
+            // floor: an element's count is a sum of terms (bath, deposits, gases, water, and for H and O the
+            // neutralisation bookkeeping built from the whole H+ and OH- inventory), so it is known only to
+            // round-off of its largest term. Seed 3, scenario 188: a NaCl-HCl bath held below decomposition
+            // holds 1.5e-12 mol of O (as OH-) while its O count moves through terms of 0.1 mol (H+): it came back
+            // 2.1e-17 mol off, one ulp of those terms. Factor 1000: the state components behind the terms (net
+            // acidity, proton turnover) take a rounding at each accepted step, a few hundred to a few thousand
+            // here, adding up as a random walk; the floor stays 2.2e-13 of the largest term
+            double floor = ROUNDING_STEPS * Math.ulp(1.0) * sizes.getOrDefault(element, 0.0);
+            assertEquals(b, a, Math.max(1e-9 * Math.max(Math.abs(b), moved), floor), "element " + element);
         }
     }
+
+    /**
+     * The smallest charge imbalance (C) the run can resolve: the floor of the charge balances' tolerance, which
+     * otherwise is 1e-9 of the charge passed. The rates conserve charge only as well as the potential solve
+     * makes an electrode's reactions carry the current it is given, and {@code ElectrodeKinetics.potentialFor}
+     * accepts a net current density within 1e-13 of the target, but at least 1e-16 A/m2 (SOLVE_FLOOR), and can
+     * do no better than di/dE times one ulp of E, E being a double (near equilibrium di/dE is about
+     * n F i0 / (R T)). In a cell held below its decomposition voltage, which moves almost no charge, that
+     * residual is a sizeable share of the current and has the same sign at every step, so it adds up over the
+     * run: seed 4, scenario 155 (lead couple at the cathode, 184 A/V) passed 4.4e-5 C with a cathode
+     * imbalance of 2.1e-12 C after 4706 s (5.1e-15 A per ulp of E); seed 3, scenario 124 (zinc on stainless,
+     * 1.9e-10 A/V) passed 3.8e-8 C with an imbalance of 5.8e-17 C (residual 2.6e-20 A, under the solve's
+     * 1e-16 A/m2 times 0.0098 m2). Bound: the duration times, summed over both electrodes, the area times the
+     * larger of SOLVE_FLOOR and |di/dE| ulp(E), taken at the start or at the end, whichever is larger, times 2
+     * (the slope is sampled at two states only; it changed by 20 % over the first run).
+     */
+    private static double chargeResolution(Scenario sc, ReactionNetwork net, double[] yEnd, double durationS) {
+        CellRates rates = new CellRates(sc, net);
+        double[] start = rates.initialState();
+        double[] f = new double[start.length];
+        double amps = 0;
+        for (double[] y : new double[][] {start, yEnd}) {
+            rates.computeDerivatives(0, y, f);
+            OperatingPoint op = rates.operatingPoint();
+            double[] slope = new double[1];
+            op.cathode.total(op.cathodeE, slope);
+            double cathode = op.cathodeAreaM2 * Math.max(SOLVE_FLOOR, Math.abs(slope[0]) * Math.ulp(op.cathodeE));
+            op.anode.total(op.anodeE, slope);
+            double anode = op.anodeAreaM2 * Math.max(SOLVE_FLOOR, Math.abs(slope[0]) * Math.ulp(op.anodeE));
+            amps = Math.max(amps, cathode + anode);
+        }
+        return 2 * amps * durationS;
+    }
+
+    /** The potential solve's absolute acceptance (A/m2): 1e-13 of its 1e-3 A/m2 floor in ElectrodeKinetics. */
+    private static final double SOLVE_FLOOR = 1e-16;
 
     /** Sum of z c over the species (mol/m3 of charge), or of |z| c. */
     private static double ionic(ReactionNetwork net, double[] c, boolean absolute) {
@@ -215,10 +248,12 @@ class ConservationTest {
 
     /**
      * Atoms of each element in the bath, the deposits and the gases, less what came in from outside (the
-     * soluble anode's metal, water consumed by reactions) and plus the water neutralisation made.
+     * soluble anode's metal, water consumed by reactions) and plus the water neutralisation made. The largest
+     * magnitude of any term summed for an element goes into {@code sizes} (mol).
      */
     private static Map<String, Double> inventory(ReactionNetwork net, StateLayout layout, double[] y,
-                                                 double[] volumes, Map<String, Double> reference) {
+                                                 double[] volumes, Map<String, Double> reference,
+                                                 Map<String, Double> sizes) {
         Map<String, Double> atoms = new HashMap<>();
         List<Species> species = net.species();
         double hPlusOh = 0;
@@ -228,7 +263,7 @@ class ConservationTest {
             double[] c = concentrations(net, y, offsets[b]);
             for (int j = 0; j < species.size(); j++) {
                 for (var e : species.get(j).elements().entrySet()) {
-                    atoms.merge(e.getKey(), c[j] * volume * e.getValue(), Double::sum);
+                    add(atoms, sizes, e.getKey(), c[j] * volume * e.getValue());
                 }
             }
             if (net.waterEquilibrium()) {
@@ -236,27 +271,39 @@ class ConservationTest {
             }
         }
         for (int m = 0; m < layout.metals; m++) {
-            atoms.merge(net.depositMetals().get(m).symbol(), y[layout.deposit0 + m], Double::sum);
+            add(atoms, sizes, net.depositMetals().get(m).symbol(), y[layout.deposit0 + m]);
         }
         String[][] gasAtoms = {{"H"}, {"O"}, {"Cl"}};
         for (int g = 0; g < StateLayout.GASES.length; g++) {
-            atoms.merge(gasAtoms[g][0], 2 * y[layout.gas0 + g], Double::sum);
+            add(atoms, sizes, gasAtoms[g][0], 2 * y[layout.gas0 + g]);
         }
         if (net.anodeMetal != null) {
-            atoms.merge(net.anodeMetal.symbol(), -y[layout.anodeDissolved], Double::sum);
+            add(atoms, sizes, net.anodeMetal.symbol(), -y[layout.anodeDissolved]);
         }
         double water = y[layout.water];
         if (net.waterEquilibrium() && reference != null) {
             double turnover = y[layout.protonTurnover];
             double start = START.get();
             water -= (turnover - hPlusOh + start) / 2;
+            double largest = Math.max(Math.abs(y[layout.water]), Math.max(Math.abs(turnover),
+                    Math.max(Math.abs(hPlusOh), Math.abs(start))) / 2);
+            sizes.merge("H", 2 * largest, Math::max);
+            sizes.merge("O", largest, Math::max);
         } else if (net.waterEquilibrium()) {
             START.set(hPlusOh);
         }
-        atoms.merge("H", -2 * water, Double::sum);
-        atoms.merge("O", -water, Double::sum);
+        add(atoms, sizes, "H", -2 * water);
+        add(atoms, sizes, "O", -water);
         return atoms;
     }
+
+    private static void add(Map<String, Double> atoms, Map<String, Double> sizes, String element, double mol) {
+        atoms.merge(element, mol, Double::sum);
+        sizes.merge(element, Math.abs(mol), Math::max);
+    }
+
+    /** Accepted steps whose roundings the element floor allows for; see where it is used. */
+    private static final double ROUNDING_STEPS = 1000;
 
     private static final ThreadLocal<Double> START = ThreadLocal.withInitial(() -> 0.0);
 
