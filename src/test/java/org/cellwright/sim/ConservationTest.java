@@ -34,7 +34,9 @@ import org.junit.jupiter.api.Test;
  * an anolyte of its own) and two-zone cells; runs that short and go on, or stop at the short. Conservation is
  * exact in the model (each partial current moves atoms by Faraday's law, the compartments exchange what one
  * loses and the other gains, a short carries the current past the electrodes), so the tolerance, 1e-9
- * relative, only covers round-off.
+ * relative, only covers round-off. Runs that move almost nothing (a cell held below its decomposition voltage)
+ * get a floor instead, from what the run can resolve: the potential solve's resolution for the charge balances
+ * ({@link #chargeResolution}) and the round-off of the largest term of an element's count (see {@link #check}).
  */
 class ConservationTest {
 
