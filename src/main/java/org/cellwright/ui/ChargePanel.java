@@ -3,7 +3,6 @@ package org.cellwright.ui;
 import java.awt.BorderLayout;
 import java.awt.Color;
 import java.awt.Font;
-import java.awt.GridBagConstraints;
 import java.awt.GridBagLayout;
 import java.awt.event.HierarchyEvent;
 import java.util.ArrayList;
@@ -81,7 +80,7 @@ final class ChargePanel extends ColumnPanel {
             add(new WrapText("Run the scenario (F5) or move a slider: how the charge divides between the metal,"
                     + " hydrogen, redox shuttles and the deposit redissolving appears here.", "muted.foreground",
                     0, Font.PLAIN, 330), GridPlace.listCell(row, 0, 3, 0));
-            finish(row + 1);
+            closeColumn(row + 1, 3);
             return;
         }
         ChartStyle style = ChartStyle.of(UiTheme.isDark());
@@ -138,15 +137,7 @@ final class ChargePanel extends ColumnPanel {
                     ? "none: the current passes through the dendrite short" : r.value();
             add(new WrapText(value, null, 0, Font.PLAIN, 330), GridPlace.listCell(row++, 0, 3, 1));
         }
-        finish(row);
-    }
-
-    private void finish(int row) {
-        GridBagConstraints c = GridPlace.listCell(row, 0, 3, 0);
-        c.weighty = 1;
-        add(new JLabel(), c);
-        revalidate();
-        repaint();
+        closeColumn(row, 3);
     }
 
     /**

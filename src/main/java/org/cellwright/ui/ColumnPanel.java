@@ -1,9 +1,11 @@
 package org.cellwright.ui;
 
 import java.awt.Dimension;
+import java.awt.GridBagConstraints;
 import java.awt.LayoutManager;
 import java.awt.Rectangle;
 
+import javax.swing.JLabel;
 import javax.swing.JPanel;
 import javax.swing.Scrollable;
 
@@ -41,5 +43,20 @@ abstract class ColumnPanel extends JPanel implements Scrollable {
     @Override
     public boolean getScrollableTracksViewportHeight() {
         return false;
+    }
+
+    /**
+     * Ends a column laid out in a grid: an empty filler below the last row takes the spare height, so the
+     * rows stay at the top; then lays the panel out again.
+     *
+     * @param row the first free grid row
+     * @param width the grid's columns
+     */
+    protected void closeColumn(int row, int width) {
+        GridBagConstraints c = GridPlace.listCell(row, 0, width, 0);
+        c.weighty = 1;
+        add(new JLabel(), c);
+        revalidate();
+        repaint();
     }
 }

@@ -1,6 +1,5 @@
 package org.cellwright.ui;
 
-import java.awt.event.ActionEvent;
 import java.awt.event.InputEvent;
 import java.awt.event.KeyEvent;
 import java.nio.file.Path;
@@ -8,7 +7,6 @@ import java.util.List;
 import java.util.concurrent.ExecutionException;
 import java.util.function.Supplier;
 
-import javax.swing.AbstractAction;
 import javax.swing.Action;
 import javax.swing.JFrame;
 import javax.swing.JMenu;
@@ -295,18 +293,6 @@ final class LogCommands {
     }
 
     private static Action action(String name, String tip, KeyStroke key, Runnable r) {
-        Action a = new AbstractAction(name) {
-            private static final long serialVersionUID = 1L;
-
-            @Override
-            public void actionPerformed(ActionEvent e) {
-                r.run();
-            }
-        };
-        a.putValue(Action.SHORT_DESCRIPTION, tip);
-        if (key != null) {
-            a.putValue(Action.ACCELERATOR_KEY, key);
-        }
-        return a;
+        return WindowActions.action(name, tip, key, null, r);
     }
 }

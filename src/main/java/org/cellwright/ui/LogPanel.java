@@ -3,7 +3,6 @@ package org.cellwright.ui;
 import java.awt.Color;
 import java.awt.FlowLayout;
 import java.awt.Font;
-import java.awt.GridBagConstraints;
 import java.awt.GridBagLayout;
 import java.util.ArrayList;
 import java.util.List;
@@ -108,7 +107,7 @@ final class LogPanel extends ColumnPanel {
                     + " over the charts as open dots, and the scenario can be fitted to it.", "muted.foreground",
                     0, Font.PLAIN, 330), GridPlace.listCell(row++, 0, 3, 0));
             add(buttons(load), GridPlace.listCell(row++, 0, 3, 8));
-            finish(row);
+            closeColumn(row, 3);
             return;
         }
         add(new WrapText(source, null, 0, Font.BOLD, 330), GridPlace.listCell(row++, 0, 3, 0));
@@ -139,15 +138,7 @@ final class LogPanel extends ColumnPanel {
                 add(new WrapText(p, null, 0, Font.PLAIN, 330), GridPlace.listCell(row++, 0, 3, 3));
             }
         }
-        finish(row);
-    }
-
-    private void finish(int row) {
-        GridBagConstraints c = GridPlace.listCell(row, 0, 3, 0);
-        c.weighty = 1;
-        add(new JLabel(), c);
-        revalidate();
-        repaint();
+        closeColumn(row, 3);
     }
 
     private static JComponent buttons(Action... actions) {

@@ -216,7 +216,15 @@ final class WindowActions {
         return KeyStroke.getKeyStroke(code, modifiers);
     }
 
-    private static Action action(String name, String tip, KeyStroke key, Icon icon, Runnable r) {
+    /**
+     * @param name menu text
+     * @param tip tooltip
+     * @param key accelerator, or null
+     * @param icon icon, or null
+     * @param r what it does
+     * @return an action that runs {@code r}
+     */
+    static Action action(String name, String tip, KeyStroke key, Icon icon, Runnable r) {
         Action a = new AbstractAction(name, icon) {
             private static final long serialVersionUID = 1L;
 
