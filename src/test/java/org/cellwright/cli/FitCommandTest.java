@@ -4,8 +4,6 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
-import java.io.PrintWriter;
-import java.io.StringWriter;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.List;
@@ -15,8 +13,6 @@ import com.fasterxml.jackson.databind.ObjectMapper;
 import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
-
-import picocli.CommandLine;
 
 /**
  * The fit command as a user calls it: a run's own CSV, written with a known diffusion layer, is fitted back;
@@ -31,31 +27,18 @@ class FitCommandTest {
     static Path dir;
     private static Path log;
 
-    private record Outcome(int code, String out, String err) {
-    }
-
-    private static Outcome execute(String... args) {
-        StringWriter out = new StringWriter();
-        StringWriter err = new StringWriter();
-        CommandLine cl = Main.commandLine();
-        cl.setOut(new PrintWriter(out));
-        cl.setErr(new PrintWriter(err));
-        int code = cl.execute(args);
-        return new Outcome(code, out.toString(), err.toString());
-    }
-
     @BeforeAll
     static void writeALog() {
         log = dir.resolve("run.csv");
         // a 2 h run of the scenario with a 150 um layer (the file says 100 um), as the run command writes it
-        Outcome o = execute("run", SCENARIO.toString(), "--set", "cell.diffusion_layer=\"150 um\"",
+        CliRun o = CliRun.of("run", SCENARIO.toString(), "--set", "cell.diffusion_layer=\"150 um\"",
                 "--set", "run.duration=\"2 h\"", "--csv", log.toString());
         assertEquals(0, o.code(), o.err());
     }
 
     @Test
     void jsonOnStandardOutputHasTheContractsKeys() throws Exception {
-        Outcome o = execute("fit", SCENARIO.toString(), "--log", log.toString(), "--free", "cell.diffusion_layer",
+        CliRun o = CliRun.of("fit", SCENARIO.toString(), "--log", log.toString(), "--free", "cell.diffusion_layer",
                 "--json", "-");
         assertEquals(0, o.code(), o.err());
         JsonNode json = new ObjectMapper().readTree(o.out());
@@ -78,7 +61,7 @@ class FitCommandTest {
     void humanOutputSaysWhereTheChargeWentAndTheChartIsWritten() throws Exception {
         Path png = dir.resolve("fit.png");
         Path json = dir.resolve("fit.json");
-        Outcome o = execute("fit", SCENARIO.toString(), "--log", log.toString(), "--free",
+        CliRun o = CliRun.of("fit", SCENARIO.toString(), "--log", log.toString(), "--free",
                 "cell.diffusion_layer,reaction.H+/H2.i0", "--weights", "cell_voltage_V=2,deposit_g=1",
                 "--chart", png.toString(), "--json", json.toString());
         assertEquals(0, o.code(), o.err());
@@ -93,7 +76,7 @@ class FitCommandTest {
 
     @Test
     void theShippedDemoLogGivesBackTheValuesItWasMadeWith() throws Exception {
-        Outcome o = execute("fit", "scenarios/copper-etchant-bleed.toml", "--log",
+        CliRun o = CliRun.of("fit", "scenarios/copper-etchant-bleed.toml", "--log",
                 "scenarios/copper-etchant-bleed-log.csv", "--free", "cell.diffusion_layer,cell.contact_resistance",
                 "--json", "-");
         assertEquals(0, o.code(), o.err());
@@ -111,7 +94,7 @@ class FitCommandTest {
     @Test
     void badInputExitsTwoAndWritesNothing() throws Exception {
         Path json = dir.resolve("never.json");
-        Outcome key = execute("fit", SCENARIO.toString(), "--log", log.toString(), "--free", "cell.diffusion_layr",
+        CliRun key = CliRun.of("fit", SCENARIO.toString(), "--log", log.toString(), "--free", "cell.diffusion_layr",
                 "--json", json.toString());
         assertEquals(2, key.code());
         assertTrue(key.err().contains("(from --free):1:1: cell.diffusion_layr"), key.err());
@@ -119,32 +102,32 @@ class FitCommandTest {
 
         Path bad = dir.resolve("bad.csv");
         Files.writeString(bad, "time_min,cell_voltage_V\n0,2.3\n1,two\n");
-        Outcome cell = execute("fit", SCENARIO.toString(), "--log", bad.toString(), "--free", "cell.gap");
+        CliRun cell = CliRun.of("fit", SCENARIO.toString(), "--log", bad.toString(), "--free", "cell.gap");
         assertEquals(2, cell.code());
         assertTrue(cell.err().contains("bad.csv:3:3: cell_voltage_V: expected a number"), cell.err());
         assertFalse(cell.err().contains("Exception"), cell.err());
 
-        Outcome weight = execute("fit", SCENARIO.toString(), "--log", log.toString(), "--free", "cell.gap",
+        CliRun weight = CliRun.of("fit", SCENARIO.toString(), "--log", log.toString(), "--free", "cell.gap",
                 "--weights", "cell_voltage_V");
         assertEquals(2, weight.code());
         assertTrue(weight.err().contains("--weights"), weight.err());
 
-        Outcome noColumn = execute("fit", SCENARIO.toString(), "--log", log.toString(), "--free", "cell.gap",
+        CliRun noColumn = CliRun.of("fit", SCENARIO.toString(), "--log", log.toString(), "--free", "cell.gap",
                 "--weights", "voltage=2");
         assertEquals(2, noColumn.code());
         assertTrue(noColumn.err().contains("the log has no such column"), noColumn.err());
 
-        Outcome chart = execute("fit", SCENARIO.toString(), "--log", log.toString(), "--free", "cell.gap",
+        CliRun chart = CliRun.of("fit", SCENARIO.toString(), "--log", log.toString(), "--free", "cell.gap",
                 "--chart", dir.resolve("x.jpg").toString());
         assertEquals(2, chart.code());
-        assertEquals(2, execute("fit", SCENARIO.toString(), "--free", "cell.gap").code());
+        assertEquals(2, CliRun.of("fit", SCENARIO.toString(), "--free", "cell.gap").code());
     }
 
     @Test
     void aReactionKeyWithoutItsMaterialGetsAHint() throws Exception {
         Path noMaterial = dir.resolve("no-material.toml");
         Files.writeString(noMaterial, Files.readString(SCENARIO).replace("[reaction.\"H+/H2\"]\nmaterial = \"copper\"", ""));
-        Outcome o = execute("fit", noMaterial.toString(), "--log", log.toString(), "--free", "reaction.H+/H2.i0");
+        CliRun o = CliRun.of("fit", noMaterial.toString(), "--log", log.toString(), "--free", "reaction.H+/H2.i0");
         assertEquals(2, o.code());
         assertTrue(o.err().contains("reaction.H+/H2.i0 does not change any of the measured values"), o.err());
         assertTrue(o.err().contains("material = \"copper\""), o.err());

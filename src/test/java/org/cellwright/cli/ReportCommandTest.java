@@ -4,8 +4,6 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
-import java.io.PrintWriter;
-import java.io.StringWriter;
 import java.nio.file.Files;
 import java.nio.file.Path;
 
@@ -15,35 +13,20 @@ import org.apache.pdfbox.text.PDFTextStripper;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 
-import picocli.CommandLine;
-
 /** The report command as a user calls it: both formats, --set, exit codes, and no half-written files. */
 class ReportCommandTest {
 
     private static final Path SCENARIO = Path.of("scenarios", "copper-etchant-bleed.toml");
 
-    private record Outcome(int code, String out, String err) {
-    }
-
-    private static Outcome execute(String... args) {
-        StringWriter out = new StringWriter();
-        StringWriter err = new StringWriter();
-        CommandLine cl = Main.commandLine();
-        cl.setOut(new PrintWriter(out));
-        cl.setErr(new PrintWriter(err));
-        int code = cl.execute(args);
-        return new Outcome(code, out.toString(), err.toString());
-    }
-
     @Test
     void writesHtmlAndPdf(@TempDir Path dir) throws Exception {
         Path html = dir.resolve("report.html");
-        Outcome o = execute("report", SCENARIO.toString(), "--out", html.toString(), "--set", "run.duration=\"1 h\"");
+        CliRun o = CliRun.of("report", SCENARIO.toString(), "--out", html.toString(), "--set", "run.duration=\"1 h\"");
         assertEquals(0, o.code(), o.err());
         String text = Files.readString(html);
         assertTrue(text.startsWith("<!DOCTYPE html>") && text.contains("Lead"), "html");
         Path pdf = dir.resolve("report.pdf");
-        o = execute("report", SCENARIO.toString(), "--out", pdf.toString(), "--set", "run.duration=\"1 h\"");
+        o = CliRun.of("report", SCENARIO.toString(), "--out", pdf.toString(), "--set", "run.duration=\"1 h\"");
         assertEquals(0, o.code(), o.err());
         try (PDDocument doc = Loader.loadPDF(pdf.toFile())) {
             String t = new PDFTextStripper().getText(doc);
@@ -56,12 +39,12 @@ class ReportCommandTest {
 
     @Test
     void badInputExitsTwoAndLeavesNothing(@TempDir Path dir) throws Exception {
-        Outcome ext = execute("report", SCENARIO.toString(), "--out", dir.resolve("r.docx").toString());
+        CliRun ext = CliRun.of("report", SCENARIO.toString(), "--out", dir.resolve("r.docx").toString());
         assertEquals(2, ext.code());
         assertTrue(ext.err().contains(".html or .pdf"), ext.err());
         Path bad = dir.resolve("bad.toml");
         Files.writeString(bad, Files.readString(SCENARIO).replace("volume = \"2 L\"", "volume = \"-2 L\""));
-        Outcome o = execute("report", bad.toString(), "--out", dir.resolve("r.pdf").toString());
+        CliRun o = CliRun.of("report", bad.toString(), "--out", dir.resolve("r.pdf").toString());
         assertEquals(2, o.code());
         assertTrue(o.err().contains("bad.toml:") && o.err().contains("electrolyte.volume"), o.err());
         assertFalse(o.err().contains("Exception"), o.err());

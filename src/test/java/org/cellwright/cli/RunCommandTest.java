@@ -4,8 +4,6 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
-import java.io.PrintWriter;
-import java.io.StringWriter;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.List;
@@ -15,29 +13,14 @@ import com.fasterxml.jackson.databind.ObjectMapper;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 
-import picocli.CommandLine;
-
 /** The run command as a user calls it: outputs, exit codes, and no half-written files. */
 class RunCommandTest {
 
     private static final Path SCENARIO = Path.of("scenarios", "copper-etchant-bleed.toml");
 
-    private record Outcome(int code, String out, String err) {
-    }
-
-    private static Outcome execute(String... args) {
-        StringWriter out = new StringWriter();
-        StringWriter err = new StringWriter();
-        CommandLine cl = Main.commandLine();
-        cl.setOut(new PrintWriter(out));
-        cl.setErr(new PrintWriter(err));
-        int code = cl.execute(args);
-        return new Outcome(code, out.toString(), err.toString());
-    }
-
     @Test
     void jsonOnStandardOutputCarriesEveryKeyOfTheContract() throws Exception {
-        Outcome o = execute("run", SCENARIO.toString(), "--json", "-", "--set", "run.duration=\"1 h\"");
+        CliRun o = CliRun.of("run", SCENARIO.toString(), "--json", "-", "--set", "run.duration=\"1 h\"");
         assertEquals(0, o.code(), o.err());
         JsonNode json = new ObjectMapper().readTree(o.out());
         for (String key : List.of("scenario", "stop_reason", "duration_s", "charge_C", "charge_Ah", "deposit_g",
@@ -62,7 +45,7 @@ class RunCommandTest {
     void csvChartAndSummaryAreWritten(@TempDir Path dir) throws Exception {
         Path csv = dir.resolve("series.csv");
         Path png = dir.resolve("sheet.png");
-        Outcome o = execute("run", SCENARIO.toString(), "--csv", csv.toString(), "--chart", png.toString(),
+        CliRun o = CliRun.of("run", SCENARIO.toString(), "--csv", csv.toString(), "--chart", png.toString(),
                 "--set", "run.duration=\"2 h\"");
         assertEquals(0, o.code(), o.err());
         assertTrue(o.out().contains("current eff."), o.out());
@@ -82,7 +65,7 @@ class RunCommandTest {
         Path bad = dir.resolve("bad.toml");
         Files.writeString(bad, Files.readString(SCENARIO).replace("gap = \"40 mm\"", "gap = \"-4 mm\""));
         Path json = dir.resolve("out.json");
-        Outcome o = execute("run", bad.toString(), "--json", json.toString());
+        CliRun o = CliRun.of("run", bad.toString(), "--json", json.toString());
         assertEquals(2, o.code());
         assertTrue(o.err().contains("bad.toml:") && o.err().contains("cell.gap"), o.err());
         assertFalse(o.err().contains("Exception"), o.err());
@@ -94,8 +77,8 @@ class RunCommandTest {
 
     @Test
     void aMissingFileAndABadChartExtensionAreBadInput(@TempDir Path dir) {
-        assertEquals(2, execute("run", dir.resolve("none.toml").toString()).code());
-        Outcome o = execute("run", SCENARIO.toString(), "--chart", dir.resolve("x.gif").toString());
+        assertEquals(2, CliRun.of("run", dir.resolve("none.toml").toString()).code());
+        CliRun o = CliRun.of("run", SCENARIO.toString(), "--chart", dir.resolve("x.gif").toString());
         assertEquals(2, o.code());
         assertTrue(o.err().contains(".png or .svg"), o.err());
     }

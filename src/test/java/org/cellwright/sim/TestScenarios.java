@@ -13,13 +13,13 @@ import org.cellwright.cell.RunSettings;
 import org.cellwright.cell.Scenario;
 
 /** Builds scenarios for the engine's tests, SI units throughout. */
-final class TestScenarios {
+public final class TestScenarios {
 
     private TestScenarios() {
     }
 
     /** An isothermal copper batch cell: stainless cathode, platinum anode, sulfate bath with acid. */
-    static Scenario copperBatch(double volumeM3, double areaM2, double deltaM, double cuMolPerM3, double amps,
+    public static Scenario copperBatch(double volumeM3, double areaM2, double deltaM, double cuMolPerM3, double amps,
                                 double durationS, double outputS) {
         Map<String, Double> comp = new LinkedHashMap<>();
         comp.put("Cu2+", cuMolPerM3);

@@ -13,6 +13,7 @@ import org.cellwright.cell.RunSettings;
 import org.cellwright.cell.Scenario;
 import org.cellwright.chem.ChemLibrary;
 import org.cellwright.io.LibraryReader;
+import org.cellwright.sim.TestScenarios;
 
 /** Scenarios and the chemistry for the study tests, SI units throughout. */
 final class StudyScenarios {
@@ -43,15 +44,7 @@ final class StudyScenarios {
      */
     static Scenario copperBatch(double volumeM3, double areaM2, double deltaM, double cuMolPerM3, double amps,
                                 double durationS, double outputS) {
-        Map<String, Double> comp = new LinkedHashMap<>();
-        comp.put("Cu2+", cuMolPerM3);
-        comp.put("H+", 1000.0);
-        comp.put("SO4^2-", cuMolPerM3 + 500.0);
-        return new Scenario("copper batch", "", new Electrolyte(volumeM3, 298.15, comp, null),
-                new Electrode("stainless", areaM2), new Electrode("platinum", areaM2),
-                new CellSetup(0.03, Agitation.ofLayer(deltaM), 298.15, 0, 1e5 * volumeM3),
-                PowerSupply.constantCurrent(amps), new RunSettings(durationS, outputS, List.of(), "Cu"),
-                List.of(), List.of());
+        return TestScenarios.copperBatch(volumeM3, areaM2, deltaM, cuMolPerM3, amps, durationS, outputS);
     }
 
     /**
