@@ -378,6 +378,15 @@ public final class CellRates implements FirstOrderDifferentialEquations {
                 op.thicknessM);
     }
 
+    /** The equilibrium potentials of an electrode's reactions as the voltage breakdown shows them (V vs SHE). */
+    private static double[] shown(ElectrodeKinetics kin, int count) {
+        double[] e = new double[count];
+        for (int k = 0; k < count; k++) {
+            e[k] = kin.shownEquilibrium(k);
+        }
+        return e;
+    }
+
     /**
      * Equilibrium potential of an electrode that runs several reactions at once: the mean of the reactions'
      * equilibrium potentials weighted by their currents in the electrode's direction. Then
@@ -390,14 +399,6 @@ public final class CellRates implements FirstOrderDifferentialEquations {
      * @param idle   what to return when nothing runs in the electrode's direction (the electrode potential)
      * @return weighted equilibrium potential (V vs SHE)
      */
-    private static double[] shown(ElectrodeKinetics kin, int count) {
-        double[] e = new double[count];
-        for (int k = 0; k < count; k++) {
-            e[k] = kin.shownEquilibrium(k);
-        }
-        return e;
-    }
-
     private static double chargeWeighted(double[] amps, int sign, double[] eEq, double idle) {
         double sum = 0;
         double weighted = 0;
